@@ -1,0 +1,36 @@
+/** Roles of signed-in staff (DESIGN.md §2). Players never have accounts. */
+export const ROLES = ['admin', 'teacher'] as const;
+/** One of {@link ROLES}. */
+export type Role = (typeof ROLES)[number];
+
+/** The one error shape of every REST error response and every failed socket ack. */
+export interface ApiError {
+  ok: false;
+  /** A stable machine-readable code, e.g. `validation_failed`, `forbidden`, `not_found`. */
+  error: string;
+  /** A sentence a teacher can read. */
+  message: string;
+  /** Field-level problems, when the error is about input. */
+  details?: { field: string; message: string }[];
+}
+
+/** The signed-in user, as `GET /api/me` returns it. */
+export interface MeDto {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  school: { id: string; name: string };
+}
+
+/** A teacher of the admin's school, as the admin's user list shows it. */
+export interface StaffUserDto {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  active: boolean;
+  /** False until an invited teacher has set a password. */
+  activated: boolean;
+  createdAt: string;
+}
