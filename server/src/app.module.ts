@@ -1,0 +1,27 @@
+import { Module } from '@nestjs/common';
+import { ConfigModule, ConfigType } from '@nestjs/config';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import { appConfig } from './config/app.config';
+import { databaseConfig } from './config/database.config';
+import { mailConfig } from './config/mail.config';
+import { validateEnv } from './config/env.validation';
+import { dataSourceOptions } from './database/data-source';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [appConfig, databaseConfig, mailConfig], validate: validateEnv }),
+    TypeOrmModule.forRootAsync({
+      inject: [databaseConfig.KEY],
+      useFactory: (db: ConfigType<typeof databaseConfig>) => dataSourceOptions(db.url, db.poolSize),
+    }),
+    MailModule,
+    AuthModule,
+    UsersModule,
+    HealthModule,
+  ],
+})
+export class AppModule {}

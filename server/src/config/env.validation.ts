@@ -1,0 +1,77 @@
+import { plainToInstance } from 'class-transformer';
+import { IsBooleanString, IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
+
+/** Every environment variable the server reads. Validated once at boot. */
+export class EnvironmentVariables {
+  @IsIn(['development', 'test', 'production'])
+  NODE_ENV: 'development' | 'test' | 'production' = 'development';
+
+  @IsString()
+  HOST: string = '127.0.0.1';
+
+  @IsInt() @Min(0) @Max(65535)
+  PORT: number = 3000;
+
+  @IsUrl({ protocols: ['postgres', 'postgresql'], require_tld: false, require_protocol: true })
+  DATABASE_URL: string;
+
+  @IsInt() @Min(1) @Max(200)
+  DATABASE_POOL_SIZE: number = 20;
+
+  /** Where links in e-mails point: the host app's public address. */
+  @IsUrl({ require_tld: false, require_protocol: true })
+  PUBLIC_URL: string = 'http://127.0.0.1:3000';
+
+  /** Signs player tokens; at least 32 characters. */
+  @IsString() @MinLength(32)
+  APP_SECRET: string;
+
+  @IsString()
+  SMTP_HOST: string = '127.0.0.1';
+
+  @IsInt() @Min(1) @Max(65535)
+  SMTP_PORT: number = 2525;
+
+  @IsBooleanString()
+  SMTP_SECURE: string = 'false';
+
+  @IsOptional() @IsString()
+  SMTP_USER?: string;
+
+  @IsOptional() @IsString()
+  SMTP_PASS?: string;
+
+  @IsString()
+  MAIL_FROM: string = 'Covalent <no-reply@covalent.invalid>';
+
+  @IsBooleanString()
+  COOKIE_SECURE: string = 'false';
+
+  /** Sign-in attempts allowed per address and e-mail within SIGNIN_WINDOW_SECONDS. */
+  @IsInt() @Min(1)
+  SIGNIN_LIMIT: number = 10;
+
+  @IsInt() @Min(1)
+  SIGNIN_WINDOW_SECONDS: number = 900;
+
+  @IsIn(['error', 'warn', 'log', 'debug', 'silent'])
+  LOG_LEVEL: 'error' | 'warn' | 'log' | 'debug' | 'silent' = 'log';
+
+  /** Built front ends, served by the server when present. */
+  @IsOptional() @IsString()
+  HOST_APP_DIST?: string;
+
+  @IsOptional() @IsString()
+  PLAYER_APP_DIST?: string;
+}
+
+/** ConfigModule `validate` hook: fails fast, naming every bad variable at once. */
+export function validateEnv(raw: Record<string, unknown>): EnvironmentVariables {
+  const env = plainToInstance(EnvironmentVariables, raw, { enableImplicitConversion: true });
+  const errors = validateSync(env, { skipMissingProperties: false, whitelist: false });
+  if (errors.length > 0) {
+    const lines = errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ')}`);
+    throw new Error(`Invalid environment configuration:\n${lines.join('\n')}`);
+  }
+  return env;
+}
