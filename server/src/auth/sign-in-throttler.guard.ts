@@ -6,8 +6,10 @@ import { ApiException } from '../common/api-error';
 @Injectable()
 export class SignInThrottlerGuard extends ThrottlerGuard {
   protected override async getTracker(req: Record<string, any>): Promise<string> {
-    const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
-    return `${req.ip}|${email}`;
+    // Sign-in and reset requests are keyed by e-mail, link redemptions by their token.
+    const body = req.body ?? {};
+    const subject = typeof body.email === 'string' ? body.email.trim().toLowerCase() : typeof body.token === 'string' ? body.token : '';
+    return `${req.ip}|${subject}`;
   }
 
   protected override async throwThrottlingException(): Promise<void> {
