@@ -1,0 +1,70 @@
+import type { RouteObject } from 'react-router-dom';
+import { RequireAdmin } from '@/features/auth/components/RequireAdmin';
+import { RequireSignedIn } from '@/features/auth/components/RequireSignedIn';
+import { AppShell } from '@/features/shell/components/AppShell';
+import { PageFallback } from '@/features/shell/components/PageFallback';
+import { PublicLayout } from '@/features/shell/components/PublicLayout';
+import { RouteErrorBoundary } from '@/features/shell/components/RouteErrorBoundary';
+import { routes } from '@/routes';
+
+/** The route tree: public pages, then signed-in pages inside the shell. Pages load on first visit. */
+export const appRouteObjects: RouteObject[] = [
+  {
+    errorElement: <RouteErrorBoundary />,
+    HydrateFallback: PageFallback,
+    children: [
+      {
+        element: <PublicLayout />,
+        children: [
+          { path: routes.signIn.path, lazy: async () => ({ Component: (await import('@/pages/SignInPage')).SignInPage }) },
+          {
+            path: routes.forgotPassword.path,
+            lazy: async () => ({ Component: (await import('@/pages/ForgotPasswordPage')).ForgotPasswordPage }),
+          },
+          {
+            path: routes.resetPassword.path,
+            lazy: async () => ({ Component: (await import('@/pages/ResetPasswordPage')).ResetPasswordPage }),
+          },
+          {
+            path: routes.acceptInvite.path,
+            lazy: async () => ({ Component: (await import('@/pages/AcceptInvitePage')).AcceptInvitePage }),
+          },
+        ],
+      },
+      {
+        element: <RequireSignedIn />,
+        children: [
+          {
+            element: <AppShell />,
+            children: [
+              {
+                path: routes.dashboard.path,
+                lazy: async () => ({ Component: (await import('@/pages/DashboardPage')).DashboardPage }),
+              },
+              { path: routes.classes.path, lazy: async () => ({ Component: (await import('@/pages/ClassesPage')).ClassesPage }) },
+              { path: routes.banks.path, lazy: async () => ({ Component: (await import('@/pages/BanksPage')).BanksPage }) },
+              {
+                path: routes.sessions.path,
+                lazy: async () => ({ Component: (await import('@/pages/SessionsPage')).SessionsPage }),
+              },
+              {
+                path: routes.debriefs.path,
+                lazy: async () => ({ Component: (await import('@/pages/DebriefsPage')).DebriefsPage }),
+              },
+              {
+                element: <RequireAdmin />,
+                children: [
+                  {
+                    path: routes.adminStaff.path,
+                    lazy: async () => ({ Component: (await import('@/pages/AdminStaffPage')).AdminStaffPage }),
+                  },
+                ],
+              },
+            ],
+          },
+        ],
+      },
+      { path: '*', lazy: async () => ({ Component: (await import('@/pages/NotFoundPage')).NotFoundPage }) },
+    ],
+  },
+];

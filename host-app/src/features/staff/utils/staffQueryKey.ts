@@ -1,0 +1,1 @@
+export const staffQueryKey = ['admin', 'staff'] as const;
