@@ -16,7 +16,7 @@ E2E_DATABASE_URL="$DATABASE_URL"
 ensure_database covalent_test fresh
 INT_DATABASE_URL="$DATABASE_URL"
 for url in "$INT_DATABASE_URL" "$E2E_DATABASE_URL"; do DATABASE_URL="$url" node "$ROOT/server/dist/database/migrate.js"; done
-DATABASE_URL="$E2E_DATABASE_URL" node "$ROOT/server/dist/database/seed.js" >/dev/null
+APP_SECRET=seed-only-seed-only-seed-only-0123456 DATABASE_URL="$E2E_DATABASE_URL" node "$ROOT/server/dist/database/seed.js" >/dev/null
 set +e
 
 LOGS="$DATA/test-logs"; mkdir -p "$LOGS"

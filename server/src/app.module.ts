@@ -2,6 +2,8 @@ import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigType } from '@nestjs/config';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
+import { BanksModule } from './banks/banks.module';
+import { ClassesModule } from './classes/classes.module';
 import { appConfig } from './config/app.config';
 import { databaseConfig } from './config/database.config';
 import { mailConfig } from './config/mail.config';
@@ -9,6 +11,7 @@ import { validateEnv } from './config/env.validation';
 import { dataSourceOptions } from './database/data-source';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
+import { MediaModule } from './media/media.module';
 import { UsersModule } from './users/users.module';
 
 @Module({
@@ -22,6 +25,9 @@ import { UsersModule } from './users/users.module';
     AuthModule,
     UsersModule,
     HealthModule,
+    MediaModule,
+    BanksModule,
+    ClassesModule,
   ],
 })
 export class AppModule {}

@@ -1,2 +1,3 @@
 export * from './items';
 export * from './api';
+export * from './authoring';

@@ -63,6 +63,10 @@ export class EnvironmentVariables {
 
   @IsOptional() @IsString()
   PLAYER_APP_DIST?: string;
+
+  /** Where uploaded images are kept; a relative path is taken from the repository root. */
+  @IsString() @MinLength(1)
+  MEDIA_DIR: string = '.data/media';
 }
 
 /** ConfigModule `validate` hook: fails fast, naming every bad variable at once. */

@@ -1,5 +1,7 @@
 import * as argon2 from 'argon2';
 import type { Role } from '@covalent/shared-types';
+import request from 'supertest';
+import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
 import { normalisePassword } from '../../src/auth/password-policy';
 import { SchoolEntity } from '../../src/users/entities/school.entity';
@@ -29,4 +31,60 @@ export async function makeUser(
     active: true,
     ...overrides,
   });
+}
+
+// ---- Authoring (banks, items, classes, media) ----
+
+/** A signed-in supertest agent for a staff user. */
+export async function signedIn(http: App, user: UserEntity): Promise<ReturnType<typeof request.agent>> {
+  const a = request.agent(http);
+  await a.post('/api/auth/sign-in').send({ email: user.email, password: PASSWORD }).expect(200);
+  return a;
+}
+
+/** Item inputs as a client sends them, one per type; options without ids, keys pointing at "#index". */
+export const itemInputs = {
+  single: () => ({
+    type: 'single',
+    prompt: 'Which glassware delivers 10.0 mL most precisely?',
+    options: [{ text: 'Beaker' }, { text: 'Volumetric pipette' }, { text: 'Conical flask' }],
+    key: { type: 'single', correctOptionId: '#1' },
+    explanation: 'It is calibrated to one volume.',
+    tags: ['glassware'],
+  }),
+  multi: () => ({
+    type: 'multi',
+    prompt: 'Which are worn as protection?',
+    options: [{ text: 'Goggles' }, { text: 'Fume cupboard' }, { text: 'Gloves' }],
+    key: { type: 'multi', correctOptionIds: ['#0', '#2'] },
+    tags: ['ppe'],
+  }),
+  truefalse: () => ({ type: 'truefalse', prompt: 'Bags go under the bench.', key: { type: 'truefalse', value: false } }),
+  order: () => ({
+    type: 'order',
+    prompt: 'Order the exit steps.',
+    options: [{ text: 'Wipe the bench' }, { text: 'Wash hands' }, { text: 'Collect bag' }],
+    key: { type: 'order', sequence: ['#0', '#1', '#2'] },
+  }),
+  numeric: () => ({
+    type: 'numeric',
+    prompt: 'Density of 12.6 g in 4.50 mL?',
+    key: { type: 'numeric', value: '2.80', unit: 'g/mL', tolerance: { kind: 'absolute', value: 0.01 }, sigFigs: 3 },
+  }),
+  text: () => ({
+    type: 'text',
+    prompt: 'Name the station for rinsing eyes.',
+    key: { type: 'text', accepted: ['eyewash station', 'eyewash'], typoTolerance: true },
+  }),
+};
+
+/** A 1×1 PNG: signature (PNG spec §5.2) then IHDR, IDAT, IEND chunks. */
+export const TINY_PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
+  'base64',
+);
+
+/** Roster CSV rows for tests, header included. */
+export function rosterCsv(rows: string[][]): Buffer {
+  return Buffer.from(['display_name,table_group,seat_number,time_multiplier', ...rows.map((r) => r.join(','))].join('\n') + '\n');
 }
