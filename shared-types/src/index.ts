@@ -1,3 +1,4 @@
 export * from './items';
 export * from './api';
 export * from './authoring';
+export * from './protocol';
