@@ -97,6 +97,23 @@ describe('Sign-in, roles and e-mailed links (integration)', () => {
     await adminAgent.post(`/api/admin/users/${admin.id}/deactivate`).expect(409);
   });
 
+  it('lets an admin set retention for their own school only, within bounds', async () => {
+    const school = await makeSchool(ctx.db);
+    const admin = await makeUser(ctx.db, school, 'admin');
+    const teacher = await makeUser(ctx.db, school);
+    const agent = request.agent(http);
+    await agent.post('/api/auth/sign-in').send({ email: admin.email, password: PASSWORD }).expect(200);
+    const res = await agent.patch('/api/admin/school').send({ retentionDays: 30 }).expect(200);
+    expect(res.body).toMatchObject({ id: school.id, retentionDays: 30 });
+    const bad = await agent.patch('/api/admin/school').send({ retentionDays: 0 }).expect(400);
+    expect(bad.body.details).toEqual([{ field: 'retentionDays', message: expect.stringMatching(/at least one day/) }]);
+    await agent.patch('/api/admin/school').send({ retentionDays: '30 days' }).expect(400);
+    const teacherAgent = request.agent(http);
+    await teacherAgent.post('/api/auth/sign-in').send({ email: teacher.email, password: PASSWORD }).expect(200);
+    await teacherAgent.patch('/api/admin/school').send({ retentionDays: 1 }).expect(403);
+    await agent.get('/api/admin/school').expect(200, { id: school.id, name: school.name, retentionDays: 30 });
+  });
+
   const linkIn = (text: string, path: string): string => {
     const m = text.match(new RegExp(`http://127\\.0\\.0\\.1:3999${path}\\?token=([A-Za-z0-9_%-]+)`));
     if (!m) throw new Error(`no ${path} link in: ${text}`);
