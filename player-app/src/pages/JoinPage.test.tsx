@@ -4,13 +4,16 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { PLAYER_TOKEN_KEY } from '@/realtime';
 import { useSessionStore } from '@/stores/useSessionStore';
 import {
+  joinInfo,
   joinSuccess,
   jsonResponse,
+  stubApi,
   stubFetch,
   stubPendingFetch,
   UNKNOWN_CODE_FAILURE,
   visit,
 } from '@/test/factories';
+import { installFakeSocket } from '@/test/fakeSocket';
 import { JoinPage } from './JoinPage';
 
 function renderPage() {
@@ -27,6 +30,7 @@ function renderPage() {
 beforeEach(() => {
   visit('/play/');
   useSessionStore.getState().reset();
+  stubApi();
 });
 
 describe(JoinPage.name, () => {
@@ -90,15 +94,60 @@ describe(JoinPage.name, () => {
   });
 
   it('sends the normalised code and trimmed nickname', async () => {
-    const fetchMock = stubFetch(200, joinSuccess());
+    const { joinCalls } = stubApi();
     const { user, codeField, nicknameField, joinButton } = renderPage();
     await user.type(codeField(), 'abc-234');
     await user.type(nicknameField(), '  Sam  ');
     await user.click(joinButton());
 
-    await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
-    const init = fetchMock.mock.calls[0]?.[1];
+    await waitFor(() => expect(joinCalls()).toHaveLength(1));
+    const init = joinCalls()[0]?.[1];
     expect(JSON.parse(init?.body as string)).toEqual({ code: 'ABC234', nickname: 'Sam' });
+  });
+
+  it('looks the code up once it is valid and shows the session title', async () => {
+    const { fetchMock } = stubApi();
+    const { user, codeField } = renderPage();
+    await user.type(codeField(), 'abc23');
+    expect(fetchMock).not.toHaveBeenCalled();
+    await user.type(codeField(), '4');
+    expect(await screen.findByText('Session: Lab entry & exit procedures')).toBeInTheDocument();
+    expect(fetchMock.mock.calls[0]?.[0]).toBe('/api/play/sessions/ABC234');
+  });
+
+  it('offers the class roster, with taken names disabled, and joins by roster entry', async () => {
+    const roster = [
+      { id: 'r-1', displayName: 'Amara O.', taken: false },
+      { id: 'r-2', displayName: 'Ben T.', taken: true },
+    ];
+    const { joinCalls } = stubApi({ info: [200, joinInfo({ roster })] });
+    const { fake, tokens } = installFakeSocket();
+    const { user, codeField, joinButton } = renderPage();
+    await user.type(codeField(), 'ABC234');
+
+    const group = await screen.findByRole('group', { name: 'Pick your name' });
+    expect(group).toBeInTheDocument();
+    expect(screen.getByRole('radio', { name: /Ben T\./ })).toBeDisabled();
+    expect(screen.queryByLabelText('Nickname')).not.toBeInTheDocument();
+
+    await user.click(joinButton());
+    expect(screen.getByRole('alert')).toHaveTextContent('Pick your name from the list.');
+
+    await user.click(screen.getByRole('radio', { name: 'Amara O.' }));
+    await user.click(joinButton());
+    await waitFor(() => expect(joinCalls()).toHaveLength(1));
+    expect(JSON.parse(joinCalls()[0]?.[1]?.body as string)).toEqual({ code: 'ABC234', rosterEntryId: 'r-1' });
+    await waitFor(() => expect(tokens).toEqual(['player-token-abc']));
+    expect(fake.connectCalls).toBe(1);
+    expect(useSessionStore.getState().nickname).toBe('Amara O.');
+  });
+
+  it('lets a rostered class member use a nickname instead', async () => {
+    stubApi({ info: [200, joinInfo({ roster: [{ id: 'r-1', displayName: 'Amara O.', taken: false }] })] });
+    const { user, codeField } = renderPage();
+    await user.type(codeField(), 'ABC234');
+    await user.click(await screen.findByRole('radio', { name: 'Use a nickname' }));
+    expect(screen.getByLabelText('Nickname')).toBeInTheDocument();
   });
 
   it("shows the server's message when the join is refused", async () => {
@@ -130,18 +179,15 @@ describe(JoinPage.name, () => {
     await waitFor(() => expect(joinButton()).toBeEnabled());
   });
 
-  it('shows the waiting state and stores the token on success', async () => {
+  it('stores the token and connects the socket with it on success', async () => {
     stubFetch(200, joinSuccess({ playerToken: 'tok-123', sessionId: 'sess-1' }));
+    const { tokens } = installFakeSocket();
     const { user, codeField, nicknameField, joinButton } = renderPage();
     await user.type(codeField(), 'ABC234');
     await user.type(nicknameField(), 'Sam');
     await user.click(joinButton());
 
-    expect(
-      await screen.findByRole('heading', { name: 'Joined — waiting for your teacher to start' }),
-    ).toBeInTheDocument();
-    expect(screen.getByRole('status')).toHaveTextContent('Sam');
-    expect(screen.queryByLabelText('Join code')).not.toBeInTheDocument();
+    await waitFor(() => expect(tokens).toEqual(['tok-123']));
     expect(localStorage.getItem(PLAYER_TOKEN_KEY)).toBe('tok-123');
     expect(useSessionStore.getState()).toMatchObject({
       phase: 'joined',

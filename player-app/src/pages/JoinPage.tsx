@@ -1,12 +1,12 @@
 import { useState } from 'react';
-import { JoinForm, JoinedNotice, PrivacyNote, readJoinCodeFromUrl } from '@/features/join';
-import { useSessionStore } from '@/stores/useSessionStore';
+import { JoinForm, PrivacyNote, readJoinCodeFromUrl } from '@/features/join';
+import { useConnectionStore } from '@/stores/useConnectionStore';
 
 export function JoinPage() {
   // Read once: later edits to the field must not be overwritten by the URL.
   const [initialCode] = useState(() => readJoinCodeFromUrl(window.location));
-  const phase = useSessionStore((s) => s.phase);
-  const nickname = useSessionStore((s) => s.nickname);
+  // Why a stored token stopped working (session ended, removed), if it did.
+  const refusedMessage = useConnectionStore((s) => s.refusedMessage);
 
   return (
     <div className="page">
@@ -18,14 +18,9 @@ export function JoinPage() {
       </header>
       <main className="page-main">
         <div className="panel">
-          {phase === 'joined' && nickname ? (
-            <JoinedNotice nickname={nickname} />
-          ) : (
-            <>
-              <h1 className="page-title">Join the review</h1>
-              <JoinForm initialCode={initialCode} />
-            </>
-          )}
+          <h1 className="page-title">Join the review</h1>
+          {refusedMessage && <p className="notice">{refusedMessage}</p>}
+          <JoinForm initialCode={initialCode} />
         </div>
       </main>
       <footer className="page-footer">

@@ -7,7 +7,7 @@ describe(PlayerConnection.name, () => {
     const fetchMock = vi.fn(async () => jsonResponse(200, joinSuccess()));
     const connection = new PlayerConnection({ fetch: fetchMock });
 
-    await connection.join('ABC234', 'Sam');
+    await connection.join({ code: 'ABC234', nickname: 'Sam' });
 
     expect(fetchMock).toHaveBeenCalledTimes(1);
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
@@ -19,14 +19,14 @@ describe(PlayerConnection.name, () => {
 
   it('returns the token and session id on success', async () => {
     const connection = new PlayerConnection({ fetch: async () => jsonResponse(201, joinSuccess()) });
-    await expect(connection.join('ABC234', 'Sam')).resolves.toEqual(joinSuccess());
+    await expect(connection.join({ code: 'ABC234', nickname: 'Sam' })).resolves.toEqual(joinSuccess());
   });
 
   it("passes the server's error code and message through", async () => {
     const connection = new PlayerConnection({
       fetch: async () => jsonResponse(404, UNKNOWN_CODE_FAILURE),
     });
-    await expect(connection.join('ABC234', 'Sam')).resolves.toEqual(UNKNOWN_CODE_FAILURE);
+    await expect(connection.join({ code: 'ABC234', nickname: 'Sam' })).resolves.toEqual(UNKNOWN_CODE_FAILURE);
   });
 
   it('reports a network failure in the same shape', async () => {
@@ -35,7 +35,7 @@ describe(PlayerConnection.name, () => {
         throw new TypeError('Failed to fetch');
       },
     });
-    await expect(connection.join('ABC234', 'Sam')).resolves.toMatchObject({
+    await expect(connection.join({ code: 'ABC234', nickname: 'Sam' })).resolves.toMatchObject({
       ok: false,
       error: 'network_error',
     });
@@ -45,7 +45,7 @@ describe(PlayerConnection.name, () => {
     const connection = new PlayerConnection({
       fetch: async () => new Response('<html>502 Bad Gateway</html>', { status: 502 }),
     });
-    await expect(connection.join('ABC234', 'Sam')).resolves.toMatchObject({
+    await expect(connection.join({ code: 'ABC234', nickname: 'Sam' })).resolves.toMatchObject({
       ok: false,
       error: 'bad_response',
     });
@@ -53,7 +53,7 @@ describe(PlayerConnection.name, () => {
 
   it('prefixes the API base when one is configured', async () => {
     const fetchMock = vi.fn(async (_url: string) => jsonResponse(200, joinSuccess()));
-    await new PlayerConnection({ apiBase: 'https://covalent.example', fetch: fetchMock }).join('ABC234', 'Sam');
+    await new PlayerConnection({ apiBase: 'https://covalent.example', fetch: fetchMock }).join({ code: 'ABC234', nickname: 'Sam' });
     expect(fetchMock.mock.calls[0]?.[0]).toBe('https://covalent.example/api/play/join');
   });
 });

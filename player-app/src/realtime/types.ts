@@ -1,16 +1,12 @@
-import type { ApiError } from '@covalent/shared-types';
+import type { ApiError, JoinInfoResponse, JoinRequest, JoinResponse } from '@covalent/shared-types';
 
-/** Body of `POST /api/play/join`. Move to shared-types once the server route lands. */
-export interface JoinRequest {
-  code: string;
-  nickname: string;
-}
+export type { JoinInfoResponse, JoinRequest };
 
-export interface JoinSuccess {
-  ok: true;
-  /** Signed, session-scoped token that identifies this player and lets them rejoin. */
-  playerToken: string;
-  sessionId: string;
-}
+/** `POST /api/play/join` success. */
+export type JoinSuccess = JoinResponse;
 
-export type JoinResult = JoinSuccess | Pick<ApiError, 'ok' | 'error' | 'message'>;
+type Failure = Pick<ApiError, 'ok' | 'error' | 'message'>;
+
+export type JoinResult = JoinSuccess | Failure;
+export type JoinInfoResult = JoinInfoResponse | Failure;
+export type RosterChoice = NonNullable<JoinInfoResponse['roster']>[number];

@@ -8,6 +8,8 @@ export interface SessionState {
   playerToken: string | null;
   nickname: string | null;
   setJoined: (joined: { sessionId: string; playerToken: string; nickname: string }) => void;
+  /** A reload with a stored token: back in without re-joining; the rest arrives with the state. */
+  resume: (playerToken: string) => void;
   reset: () => void;
 }
 
@@ -23,5 +25,6 @@ export const useSessionStore = create<SessionState>()((set) => ({
   ...initial,
   setJoined: ({ sessionId, playerToken, nickname }) =>
     set({ phase: 'joined', sessionId, playerToken, nickname }),
+  resume: (playerToken) => set({ phase: 'joined', playerToken }),
   reset: () => set(initial),
 }));

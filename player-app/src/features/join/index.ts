@@ -1,7 +1,8 @@
 export { JoinForm } from './components/JoinForm';
+export { RosterPicker } from './components/RosterPicker';
+export type { RosterPickerProps } from './components/RosterPicker';
+export { useJoinInfo } from './hooks/useJoinInfo';
 export type { JoinFormProps } from './components/JoinForm';
-export { JoinedNotice } from './components/JoinedNotice';
-export type { JoinedNoticeProps } from './components/JoinedNotice';
 export { PrivacyNote } from './components/PrivacyNote';
 export {
   JOIN_CODE_ALPHABET,

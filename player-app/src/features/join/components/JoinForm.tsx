@@ -1,7 +1,11 @@
 import { useId, useRef, useState, type ChangeEvent, type FormEvent } from 'react';
-import { joinSession } from '@/realtime';
-import { isValidJoinCode } from '../utils/joinCode';
-import { validateJoin, type JoinFieldErrors } from '../utils/validateJoin';
+import { joinSession, joinWithRosterEntry, type RosterChoice } from '@/realtime';
+import { useJoinInfo } from '../hooks/useJoinInfo';
+import { isValidJoinCode, normaliseJoinCode } from '../utils/joinCode';
+import { validateJoin, validateJoinCode, type JoinFieldErrors } from '../utils/validateJoin';
+import { RosterPicker } from './RosterPicker';
+
+type JoinMode = 'roster' | 'nickname';
 
 export interface JoinFormProps {
   /** A code carried by the link the player opened (QR code on the board), already normalised. */
@@ -14,6 +18,11 @@ export function JoinForm({ initialCode = '' }: JoinFormProps) {
   const [errors, setErrors] = useState<JoinFieldErrors>({});
   const [serverMessage, setServerMessage] = useState<string | null>(null);
   const [submitting, setSubmitting] = useState(false);
+  const [mode, setMode] = useState<JoinMode>('roster');
+  const [picked, setPicked] = useState<RosterChoice | null>(null);
+  const info = useJoinInfo(code);
+  const roster = info?.ok ? info.roster : null;
+  const byRoster = roster !== null && mode === 'roster';
   const codeRef = useRef<HTMLInputElement>(null);
   const nicknameRef = useRef<HTMLInputElement>(null);
 
@@ -36,6 +45,7 @@ export function JoinForm({ initialCode = '' }: JoinFormProps) {
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (submitting) return;
+    if (byRoster) return submitRosterPick();
     const validation = validateJoin({ code, nickname });
     if (!validation.ok) {
       setErrors(validation.errors);
@@ -47,6 +57,25 @@ export function JoinForm({ initialCode = '' }: JoinFormProps) {
     setSubmitting(true);
     try {
       const result = await joinSession(validation.values.code, validation.values.nickname);
+      if (!result.ok) setServerMessage(result.message);
+    } finally {
+      setSubmitting(false);
+    }
+  }
+
+  async function submitRosterPick() {
+    const codeError = validateJoinCode(code);
+    const current = picked && roster?.find((r) => r.id === picked.id && !r.taken);
+    if (codeError || !current) {
+      setErrors({ code: codeError, nickname: current ? undefined : 'Pick your name from the list.' });
+      if (codeError) codeRef.current?.focus();
+      return;
+    }
+    setErrors({});
+    setServerMessage(null);
+    setSubmitting(true);
+    try {
+      const result = await joinWithRosterEntry(normaliseJoinCode(code), current.id, current.displayName);
       if (!result.ok) setServerMessage(result.message);
     } finally {
       setSubmitting(false);
@@ -83,37 +112,69 @@ export function JoinForm({ initialCode = '' }: JoinFormProps) {
             {errors.code}
           </p>
         )}
+        <p className="field-hint" aria-live="polite">
+          {info?.ok && `Session: ${info.sessionTitle}`}
+          {info?.ok && info.joiningLocked && ' — joining is closed for now. Ask your teacher.'}
+          {info && !info.ok && info.error !== 'network_error' && info.error !== 'bad_response' && info.message}
+        </p>
       </div>
 
-      <div className="field">
-        <label htmlFor={nicknameId}>Nickname</label>
-        <p id={`${nicknameId}-hint`} className="field-hint">
-          First name or a nickname — no surnames or e-mail addresses
-        </p>
-        <input
-          ref={nicknameRef}
-          id={nicknameId}
-          name="nickname"
-          className="input"
-          type="text"
-          autoComplete="off"
-          autoCorrect="off"
-          spellCheck={false}
-          enterKeyHint="go"
-          maxLength={40}
-          // Arriving from the QR code, the code is done: go straight to the nickname.
-          autoFocus={isValidJoinCode(initialCode)}
-          value={nickname}
-          onChange={onNicknameChange}
-          aria-invalid={errors.nickname ? true : undefined}
-          aria-describedby={`${nicknameId}-hint${errors.nickname ? ` ${nicknameId}-error` : ''}`}
+      {roster && (
+        <fieldset className="join-mode">
+          <legend>How do you want to join?</legend>
+          <label className="choice">
+            <input type="radio" name="mode" checked={mode === 'roster'} onChange={() => setMode('roster')} />
+            Pick my name from the class list
+          </label>
+          <label className="choice">
+            <input type="radio" name="mode" checked={mode === 'nickname'} onChange={() => setMode('nickname')} />
+            Use a nickname
+          </label>
+        </fieldset>
+      )}
+
+      {byRoster && roster ? (
+        <RosterPicker
+          roster={roster}
+          selectedId={picked?.id ?? null}
+          error={errors.nickname}
+          onPick={(entry) => {
+            setPicked(entry);
+            setErrors((prev) => ({ ...prev, nickname: undefined }));
+            setServerMessage(null);
+          }}
         />
-        {errors.nickname && (
-          <p id={`${nicknameId}-error`} className="field-error" role="alert">
-            {errors.nickname}
+      ) : (
+        <div className="field">
+          <label htmlFor={nicknameId}>Nickname</label>
+          <p id={`${nicknameId}-hint`} className="field-hint">
+            First name or a nickname — no surnames or e-mail addresses
           </p>
-        )}
-      </div>
+          <input
+            ref={nicknameRef}
+            id={nicknameId}
+            name="nickname"
+            className="input"
+            type="text"
+            autoComplete="off"
+            autoCorrect="off"
+            spellCheck={false}
+            enterKeyHint="go"
+            maxLength={40}
+            // Arriving from the QR code, the code is done: go straight to the nickname.
+            autoFocus={isValidJoinCode(initialCode)}
+            value={nickname}
+            onChange={onNicknameChange}
+            aria-invalid={errors.nickname ? true : undefined}
+            aria-describedby={`${nicknameId}-hint${errors.nickname ? ` ${nicknameId}-error` : ''}`}
+          />
+          {errors.nickname && (
+            <p id={`${nicknameId}-error`} className="field-error" role="alert">
+              {errors.nickname}
+            </p>
+          )}
+        </div>
+      )}
 
       {serverMessage && (
         <p className="form-error" role="alert">

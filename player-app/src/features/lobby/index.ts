@@ -1,0 +1,1 @@
+export { LobbyScreen } from './components/LobbyScreen';
