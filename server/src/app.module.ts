@@ -12,6 +12,7 @@ import { dataSourceOptions } from './database/data-source';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MediaModule } from './media/media.module';
+import { SessionsModule } from './sessions/sessions.module';
 import { UsersModule } from './users/users.module';
 
 @Module({
@@ -28,6 +29,7 @@ import { UsersModule } from './users/users.module';
     MediaModule,
     BanksModule,
     ClassesModule,
+    SessionsModule,
   ],
 })
 export class AppModule {}

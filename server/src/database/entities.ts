@@ -10,6 +10,11 @@ import { RosterEntryEntity } from '../classes/entities/roster-entry.entity';
 import { MediaEntity } from '../media/entities/media.entity';
 import { SchoolEntity } from '../users/entities/school.entity';
 import { UserEntity } from '../users/entities/user.entity';
+import { ResponseEntity } from '../sessions/entities/response.entity';
+import { SessionPlayerEntity } from '../sessions/entities/session-player.entity';
+import { SessionRoundEntity } from '../sessions/entities/session-round.entity';
+import { SessionTeamEntity } from '../sessions/entities/session-team.entity';
+import { SessionEntity } from '../sessions/entities/session.entity';
 
 /** Every entity, for the app's TypeORM module and the migrations CLI alike. */
 export const ENTITIES = [
@@ -25,4 +30,10 @@ export const ENTITIES = [
   ClassCoTeacherEntity,
   RosterEntryEntity,
   PairRuleEntity,
+  SessionEntity,
+  SessionTeamEntity,
+  SessionPlayerEntity,
+  SessionRoundEntity,
+  ResponseEntity,
 ];
+

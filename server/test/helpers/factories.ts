@@ -88,3 +88,33 @@ export const TINY_PNG = Buffer.from(
 export function rosterCsv(rows: string[][]): Buffer {
   return Buffer.from(['display_name,table_group,seat_number,time_multiplier', ...rows.map((r) => r.join(','))].join('\n') + '\n');
 }
+
+// ---- Live sessions ----
+
+/** A bank of the owner's with the given item inputs (see itemInputs), created through the API; returns ids and the stored items. */
+export async function makeBankWithItems(
+  agent: ReturnType<typeof request.agent>,
+  inputs: object[],
+  title = 'Lab entry & exit procedures',
+): Promise<{ bankId: string; items: { id: string; type: string; prompt: string; options: { id: string; text: string }[]; key: any }[] }> {
+  const bank = (await agent.post('/api/banks').send({ title }).expect(201)).body;
+  const items = [];
+  for (const input of inputs) items.push((await agent.post(`/api/banks/${bank.id}/items`).send(input).expect(201)).body);
+  return { bankId: bank.id, items };
+}
+
+/** A CreateSessionRequest with test-friendly defaults. */
+export function sessionRequest(bankId: string, overrides: Record<string, unknown> = {}): Record<string, unknown> {
+  return {
+    bankId,
+    classId: null,
+    format: 'huddle',
+    roundSeconds: 30,
+    speedWeight: 0.5,
+    standings: 'full',
+    teamCount: 2,
+    mixerMode: 'random',
+    namePack: 'elements',
+    ...overrides,
+  };
+}

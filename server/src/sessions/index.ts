@@ -1,0 +1,14 @@
+export { SessionsModule } from './sessions.module';
+export { SessionsService, type HostableSession } from './sessions.service';
+export { LiveSessionsService, type Fail, type JoinInput, type SubmitAck } from './live/live-sessions.service';
+export { SessionStore } from './live/session-store.service';
+export { SessionEmitter, rooms } from './live/session-emitter.service';
+export { signPlayerToken, verifyPlayerToken, type PlayerTokenClaims } from './player-token';
+export { checkNickname, nicknameKey } from './nickname';
+export { newJoinCode, normaliseJoinCode } from './join-code';
+export { SESSION_CLOCK, SESSION_TUNING, PLAY_RATE_LIMIT, DEFAULT_SESSION_TUNING, DEFAULT_PLAY_RATE_LIMIT } from './sessions.constants';
+export { SessionEntity, type SessionItem, type SessionSettings } from './entities/session.entity';
+export { SessionTeamEntity } from './entities/session-team.entity';
+export { SessionPlayerEntity } from './entities/session-player.entity';
+export { SessionRoundEntity } from './entities/session-round.entity';
+export { ResponseEntity, type ResponseKind } from './entities/response.entity';
