@@ -36,6 +36,10 @@ export const routes = {
   bank: { path: '/banks/:bankId', build: (bankId: string) => `/banks/${segment(bankId)}` },
   sessions: { path: '/sessions', build: () => '/sessions' },
   session: { path: '/sessions/:sessionId', build: (sessionId: string) => `/sessions/${segment(sessionId)}` },
+  /** Setting up a session; `bankId` preselects a bank. */
+  sessionNew: { path: '/sessions/new', build: (bankId?: string) => withQuery('/sessions/new', { bankId }) },
+  /** The projected host screen, full-screen outside the app shell. */
+  hostSession: { path: '/host/:sessionId', build: (sessionId: string) => `/host/${segment(sessionId)}` },
   debriefs: { path: '/debriefs', build: () => '/debriefs' },
   debrief: { path: '/debriefs/:sessionId', build: (sessionId: string) => `/debriefs/${segment(sessionId)}` },
   adminStaff: { path: '/admin/staff', build: () => '/admin/staff' },

@@ -1,5 +1,24 @@
 const id = (value: string): string => encodeURIComponent(value);
 
+/** Adds a query string, leaving out empty values. */
+function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value !== undefined && value !== '') params.set(key, value);
+  }
+  const search = params.toString();
+  return search ? `${path}?${search}` : path;
+}
+
+/** Query of `GET /api/banks`. */
+export interface BankListQuery {
+  q?: string;
+  tag?: string;
+  archived?: 'true' | 'false' | 'all';
+  sort?: 'title' | 'updatedAt' | 'itemCount';
+  dir?: 'asc' | 'desc';
+}
+
 /** REST endpoints of the Covalent server, relative to the app's origin (Vite proxies `/api`). */
 export const apiPaths = {
   me: '/api/me',
@@ -12,4 +31,38 @@ export const apiPaths = {
   staffInvitations: '/api/admin/users/invitations',
   staffDeactivate: (userId: string) => `/api/admin/users/${id(userId)}/deactivate`,
   staffReactivate: (userId: string) => `/api/admin/users/${id(userId)}/reactivate`,
+
+  banks: (query: BankListQuery = {}) => withQuery('/api/banks', { ...query }),
+  bankCreate: '/api/banks',
+  bankImport: '/api/banks/import',
+  bank: (bankId: string) => `/api/banks/${id(bankId)}`,
+  bankExport: (bankId: string) => `/api/banks/${id(bankId)}/export`,
+  bankDuplicate: (bankId: string) => `/api/banks/${id(bankId)}/duplicate`,
+  bankArchive: (bankId: string) => `/api/banks/${id(bankId)}/archive`,
+  bankUnarchive: (bankId: string) => `/api/banks/${id(bankId)}/unarchive`,
+  bankShares: (bankId: string) => `/api/banks/${id(bankId)}/shares`,
+  bankShare: (bankId: string, userId: string) => `/api/banks/${id(bankId)}/shares/${id(userId)}`,
+  bankItems: (bankId: string) => `/api/banks/${id(bankId)}/items`,
+  bankItemsImport: (bankId: string) => `/api/banks/${id(bankId)}/items/import`,
+  bankItemsOrder: (bankId: string) => `/api/banks/${id(bankId)}/items/order`,
+  bankItem: (bankId: string, itemId: string) => `/api/banks/${id(bankId)}/items/${id(itemId)}`,
+
+  mediaImages: '/api/media/images',
+  mediaImage: (mediaId: string) => `/api/media/images/${id(mediaId)}`,
+
+  classes: (archived: 'true' | 'false' | 'all' = 'false') => withQuery('/api/classes', { archived }),
+  classCreate: '/api/classes',
+  class: (classId: string) => `/api/classes/${id(classId)}`,
+  classArchive: (classId: string) => `/api/classes/${id(classId)}/archive`,
+  classUnarchive: (classId: string) => `/api/classes/${id(classId)}/unarchive`,
+  classCoTeachers: (classId: string) => `/api/classes/${id(classId)}/co-teachers`,
+  classCoTeacher: (classId: string, userId: string) => `/api/classes/${id(classId)}/co-teachers/${id(userId)}`,
+  classRoster: (classId: string) => `/api/classes/${id(classId)}/roster`,
+  classRosterImport: (classId: string) => `/api/classes/${id(classId)}/roster/import`,
+  classRosterEntry: (classId: string, entryId: string) => `/api/classes/${id(classId)}/roster/${id(entryId)}`,
+  classPairs: (classId: string) => `/api/classes/${id(classId)}/pairs`,
+  classPair: (classId: string, pairId: string) => `/api/classes/${id(classId)}/pairs/${id(pairId)}`,
+
+  sessions: '/api/sessions',
+  session: (sessionId: string) => `/api/sessions/${id(sessionId)}`,
 } as const;

@@ -38,7 +38,9 @@ function fallbackError(status: number): ApiError {
 
 async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body sets its own multipart boundary; only JSON needs the header.
+  const isForm = body instanceof FormData;
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
 
   let response: Response;
   try {
@@ -46,7 +48,7 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
     });
   } catch {
     throw new ApiRequestError(0, UNREACHABLE);
@@ -66,4 +68,6 @@ export const apiClient = {
   patch: <T>(path: string, body?: unknown): Promise<T> => request<T>('PATCH', path, body),
   put: <T>(path: string, body?: unknown): Promise<T> => request<T>('PUT', path, body),
   delete: <T>(path: string): Promise<T> => request<T>('DELETE', path),
+  /** A multipart POST (file uploads, CSV imports). */
+  upload: <T>(path: string, form: FormData): Promise<T> => request<T>('POST', path, form),
 };

@@ -42,10 +42,22 @@ export const appRouteObjects: RouteObject[] = [
                 lazy: async () => ({ Component: (await import('@/pages/DashboardPage')).DashboardPage }),
               },
               { path: routes.classes.path, lazy: async () => ({ Component: (await import('@/pages/ClassesPage')).ClassesPage }) },
+              {
+                path: routes.classDetail.path,
+                lazy: async () => ({ Component: (await import('@/pages/ClassDetailPage')).ClassDetailPage }),
+              },
               { path: routes.banks.path, lazy: async () => ({ Component: (await import('@/pages/BanksPage')).BanksPage }) },
+              {
+                path: routes.bank.path,
+                lazy: async () => ({ Component: (await import('@/pages/BankEditorPage')).BankEditorPage }),
+              },
               {
                 path: routes.sessions.path,
                 lazy: async () => ({ Component: (await import('@/pages/SessionsPage')).SessionsPage }),
+              },
+              {
+                path: routes.sessionNew.path,
+                lazy: async () => ({ Component: (await import('@/pages/SessionSetupPage')).SessionSetupPage }),
               },
               {
                 path: routes.debriefs.path,
@@ -61,6 +73,11 @@ export const appRouteObjects: RouteObject[] = [
                 ],
               },
             ],
+          },
+          // The projected host screen: signed in, but full-screen without the shell.
+          {
+            path: routes.hostSession.path,
+            lazy: async () => ({ Component: (await import('@/pages/HostSessionPage')).HostSessionPage }),
           },
         ],
       },
