@@ -36,7 +36,7 @@ const http = createServer((req, res) => {
 
 function metrics() {
   const m = process.memoryUsage();
-  return { eventLoopP99Ms: loop.percentile(99) / 1e6, heapUsed: m.heapUsed, rss: m.rss, sockets: io.of('/play').sockets.size };
+  return { eventLoopP99Ms: Math.max(0, loop.percentile(99) / 1e6 - 10), heapUsed: m.heapUsed, rss: m.rss, sockets: io.of('/play').sockets.size };
 }
 
 const io = new Server(http, { serveClient: false, perMessageDeflate: false, maxHttpBufferSize: 16 * 1024 });
@@ -53,7 +53,7 @@ io.of('/host').on('connection', (socket) => {
   socket.on('host:command', (cmd, ack) => {
     const s = sessions.get(sessionId);
     if (!s) return ack?.({ ok: false, error: 'unknown_session', message: 'no such session' });
-    if (cmd?.type === 'open_round' || cmd?.type === 'next') {
+    if (cmd?.type === 'open_round') {
       s.roundIndex += 1;
       io.of('/play').to(`session:${sessionId}`).emit('round:opened', {
         roundIndex: s.roundIndex,

@@ -13,6 +13,8 @@ export const appConfig = registerAs('app', () => {
     signInLimit: env.SIGNIN_LIMIT,
     signInWindowMs: env.SIGNIN_WINDOW_SECONDS * 1000,
     logLevel: env.LOG_LEVEL,
+    playJoinLimit: env.PLAY_JOIN_LIMIT,
+    benchMetrics: env.BENCH_METRICS === 'true',
     hostAppDist: env.HOST_APP_DIST,
     playerAppDist: env.PLAYER_APP_DIST,
   };

@@ -57,6 +57,14 @@ export class EnvironmentVariables {
   @IsIn(['error', 'warn', 'log', 'debug', 'silent'])
   LOG_LEVEL: 'error' | 'warn' | 'log' | 'debug' | 'silent' = 'log';
 
+  /** Requests per minute per client address on the public join routes (a class behind one address joins at once). */
+  @IsInt() @Min(1)
+  PLAY_JOIN_LIMIT: number = 300;
+
+  /** Exposes /api/bench/metrics for the load benchmark; never in normal use. */
+  @IsBooleanString()
+  BENCH_METRICS: string = 'false';
+
   /** Built front ends, served by the server when present. */
   @IsOptional() @IsString()
   HOST_APP_DIST?: string;

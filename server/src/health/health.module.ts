@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
+import { BenchMetricsController } from './bench-metrics.controller';
 import { HealthController } from './health.controller';
 
-@Module({ controllers: [HealthController] })
+@Module({ controllers: [HealthController, BenchMetricsController] })
 export class HealthModule {}

@@ -1,3 +1,5 @@
+import { ConfigType } from '@nestjs/config';
+import { appConfig } from '../config/app.config';
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { BanksModule } from '../banks/banks.module';
@@ -44,7 +46,11 @@ import {
     JoinRateLimitGuard,
     { provide: SESSION_CLOCK, useValue: { now: () => Date.now() } },
     { provide: SESSION_TUNING, useValue: DEFAULT_SESSION_TUNING },
-    { provide: PLAY_RATE_LIMIT, useValue: DEFAULT_PLAY_RATE_LIMIT },
+    {
+      provide: PLAY_RATE_LIMIT,
+      inject: [appConfig.KEY],
+      useFactory: (config: ConfigType<typeof appConfig>) => ({ ...DEFAULT_PLAY_RATE_LIMIT, requests: config.playJoinLimit }),
+    },
   ],
   exports: [SessionsService, LiveSessionsService, SessionStore],
 })
