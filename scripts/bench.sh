@@ -5,7 +5,7 @@ cleanup() { if [ "${PG_STARTED_HERE:-0}" = 1 ]; then stop_postgres; fi; }
 trap cleanup EXIT
 ensure_node_modules
 start_postgres
-build_all
+[ "${BENCH_SKIP_BUILD:-0}" = 1 ] || build_all
 ensure_database covalent_bench fresh
 node "$ROOT/server/dist/database/migrate.js"
 APP_SECRET=bench-seed-bench-seed-bench-seed-0123456 node "$ROOT/server/dist/database/seed.js" >/dev/null

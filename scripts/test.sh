@@ -36,6 +36,8 @@ run() {
               f=$(grep -E '^Tests:' <<<"$clean" | grep -oE '[0-9]+ failed' | grep -oE '[0-9]+' | tail -1) ;;
     *-vitest) p=$(grep -E '^\s+Tests' <<<"$clean" | grep -oE '[0-9]+ passed' | grep -oE '[0-9]+' | tail -1)
               f=$(grep -E '^\s+Tests' <<<"$clean" | grep -oE '[0-9]+ failed' | grep -oE '[0-9]+' | tail -1) ;;
+    bench-*)  p=$(grep -oE '^bench-smoke: [0-9]+ passed' <<<"$clean" | grep -oE '[0-9]+' | tail -1)
+              f=$(grep -oE '^bench[a-z-]*: [0-9]+ passed, [0-9]+ failed' <<<"$clean" | grep -oE '[0-9]+ failed' | grep -oE '[0-9]+' | tail -1) ;;
     e2e)      p=$(grep -oE '^\s+[0-9]+ passed' <<<"$clean" | grep -oE '[0-9]+' | tail -1)
               f=$(grep -oE '^\s+[0-9]+ failed' <<<"$clean" | grep -oE '[0-9]+' | tail -1) ;;
   esac
@@ -48,6 +50,8 @@ DATABASE_URL="$INT_DATABASE_URL" run server-integration "$ROOT/server" npx jest 
 run host-app-vitest "$ROOT/host-app" npx vitest run
 run player-app-vitest "$ROOT/player-app" npx vitest run
 DATABASE_URL="$E2E_DATABASE_URL" run e2e "$ROOT" npx playwright test --config e2e/playwright.config.ts
+# The load benchmark's smoke run: a few hundred players; fails only on lost or doubled answers.
+BENCH_SKIP_BUILD=1 run bench-smoke "$ROOT" bash scripts/bench.sh --smoke
 
 echo
 log "summary"
