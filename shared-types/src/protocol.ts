@@ -135,7 +135,10 @@ export interface MixerSummary {
 export interface RoundTiming {
   roundIndex: number;
   status: RoundStatus;
-  /** Server clock (ms since epoch) at which this client's (or team's) window closes; null when not open. */
+  /**
+   * Server clock (ms since epoch) at which this client's (or team's) window closes; null when not
+   * open. While paused it is frozen: the time left is `deadlineAt − serverNow`.
+   */
   deadlineAt: number | null;
   limitMs: number;
   paused: boolean;
@@ -214,6 +217,9 @@ export interface HostSessionView {
     timing: RoundTiming;
     itemIndex: number;
     itemCount: number;
+    /** The bank item on screen, and its tags (the host shows the lab-safety caution for `safety`). */
+    itemId: string;
+    tags: string[];
     item: PlayerItemView;
     /** Per team: how many have locked in; never who got what. */
     progress: { teamId: string; answered: number; members: number }[];

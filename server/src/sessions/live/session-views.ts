@@ -231,6 +231,8 @@ export function hostView(s: LiveSession): HostSessionView {
       timing: timing(s, round, null),
       itemIndex: round.index,
       itemCount: s.meta.items.length,
+      itemId: s.meta.items[round.index].id,
+      tags: s.meta.items[round.index].tags,
       item: itemView(s, round.index),
       progress: s.teams.map((t) => {
         const members = round.roster.filter((r) => r.teamId === t.id && s.statusOf(r.playerId) !== 'removed');

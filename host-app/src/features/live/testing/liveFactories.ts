@@ -64,6 +64,8 @@ export function makeRound(overrides: Partial<HostRound> = {}): HostRound {
     timing: makeTiming(),
     itemIndex: 2,
     itemCount: 8,
+    itemId: 'item-3',
+    tags: [],
     item: {
       type: 'single',
       prompt: 'Where do bags go when you enter the lab?',
