@@ -83,7 +83,13 @@ async function main() {
   const playerSpecs = Array.from({ length: opts.players }, (_, i) => ({ i, session: sessions[i % sessionCount] }));
   const connectStarted = Date.now();
   const players = await pool(playerSpecs, 50, async ({ i, session }) => {
-    const join = await http('POST', '/api/play/join', { code: session.joinCode, nickname: `Player ${i}` });
+    // Digits can read as letters to the nickname filter ("455"), so number players in consonants.
+    const tag = String(i).replace(/\d/g, (d) => 'bcdghjmnpq'[Number(d)]);
+    let join;
+    for (const nickname of [`Player ${tag}`, `Seat ${tag} q`]) {
+      join = await http('POST', '/api/play/join', { code: session.joinCode, nickname });
+      if (join.json?.error !== 'nickname_not_allowed') break;
+    }
     if (!join.json?.ok) throw new Error(`join: ${join.status} ${JSON.stringify(join.json)}`);
     const socket = await connect('/play', { token: join.json.playerToken, protocolVersion: 1 });
     const p = { i, session, socket, playerId: join.json.playerId, rounds: new Map() };
