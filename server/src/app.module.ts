@@ -4,6 +4,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
 import { BanksModule } from './banks/banks.module';
 import { ClassesModule } from './classes/classes.module';
+import { DebriefModule } from './debrief/debrief.module';
 import { appConfig } from './config/app.config';
 import { databaseConfig } from './config/database.config';
 import { mailConfig } from './config/mail.config';
@@ -12,6 +13,7 @@ import { dataSourceOptions } from './database/data-source';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MediaModule } from './media/media.module';
+import { RetentionModule } from './retention/retention.module';
 import { SessionsModule } from './sessions/sessions.module';
 import { UsersModule } from './users/users.module';
 
@@ -30,6 +32,8 @@ import { UsersModule } from './users/users.module';
     BanksModule,
     ClassesModule,
     SessionsModule,
+    DebriefModule,
+    RetentionModule,
   ],
 })
 export class AppModule {}

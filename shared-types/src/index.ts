@@ -2,3 +2,4 @@ export * from './items';
 export * from './api';
 export * from './authoring';
 export * from './protocol';
+export * from './debrief';

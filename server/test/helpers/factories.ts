@@ -1,4 +1,5 @@
 import * as argon2 from 'argon2';
+import { randomUUID } from 'node:crypto';
 import type { Role } from '@covalent/shared-types';
 import request from 'supertest';
 import type { App } from 'supertest/types';
@@ -117,4 +118,43 @@ export function sessionRequest(bankId: string, overrides: Record<string, unknown
     namePack: 'elements',
     ...overrides,
   };
+}
+
+// ---- Debrief and retention ----
+
+/**
+ * An ended session written straight to the database (no sockets): `players` players, each with
+ * one final answer to one true/false item. For suites that need stored results of a given age.
+ */
+export async function makeEndedSession(
+  db: DataSource,
+  opts: { school: SchoolEntity; owner: UserEntity; endedAt: Date; players?: number; classId?: string | null },
+): Promise<{ sessionId: string; playerIds: string[] }> {
+  const itemId = randomUUID();
+  const sessionId = randomUUID();
+  const item = { id: itemId, type: 'truefalse', prompt: 'Bags go under the bench.', options: [], key: { type: 'truefalse', value: false }, explanation: '', tags: ['procedures'], imageId: null };
+  await db.query(
+    `INSERT INTO sessions (id, owner_id, school_id, bank_title, class_id, join_code, status, format, settings, item_ids, items, seed, snapshot, started_at, ended_at)
+     VALUES ($1, $2, $3, 'Lab entry & exit procedures', $4, 'QQQQQQ', 'ended', 'solo', $5::jsonb, $6::uuid[], $7::jsonb, 'seed', $8::jsonb, $9, $9)`,
+    [
+      sessionId, opts.owner.id, opts.school.id, opts.classId ?? null,
+      JSON.stringify({ roundSeconds: 30, speedWeight: 0.5, standings: 'full', teamCount: 1, targetTeamSize: null, mixerMode: 'random', namePack: 'elements' }),
+      [itemId], JSON.stringify([item]), JSON.stringify({ rounds: [], acceptances: [], players: [], teams: [] }), opts.endedAt,
+    ],
+  );
+  await db.query(`INSERT INTO session_rounds (session_id, "index", item_id, status) VALUES ($1, 0, $2, 'revealed')`, [sessionId, itemId]);
+  const playerIds: string[] = [];
+  for (let i = 0; i < (opts.players ?? 2); i++) {
+    const [p] = await db.query(
+      `INSERT INTO session_players (session_id, nickname, nickname_key, status) VALUES ($1, $2, $3, 'connected') RETURNING id`,
+      [sessionId, `Player ${i + 1}`, `player ${i + 1}`],
+    );
+    playerIds.push(p.id);
+    await db.query(
+      `INSERT INTO responses (session_id, round_index, player_id, client_message_id, kind, response, locked, credit, correct, points, final, elapsed_ms, received_at)
+       VALUES ($1, 0, $2, 'm1', 'answer', $3::jsonb, true, $4, $5, $6, true, 1000, $7)`,
+      [sessionId, p.id, JSON.stringify({ type: 'truefalse', value: i % 2 === 1 }), i % 2 === 0 ? 1 : 0, i % 2 === 0, i % 2 === 0 ? 1000 : 0, opts.endedAt],
+    );
+  }
+  return { sessionId, playerIds };
 }
