@@ -115,6 +115,19 @@ describe('HostSessionPage', () => {
     expect(screen.getByRole('timer', { name: 'Time left' })).toHaveTextContent(/^(19|20)seconds left$/);
   });
 
+  it('in numbered, says whether each team has answered rather than counting members who may not answer', async () => {
+    await renderHost(
+      makeRunningView(
+        { progress: [{ teamId: 'team-ar', answered: 1, members: 4 }, { teamId: 'team-b', answered: 0, members: 3 }] },
+        { session: makeSessionDto({ status: 'running', format: 'numbered' }) },
+      ),
+    );
+    const rows = within(await screen.findByRole('list', { name: 'Answers so far' })).getAllByRole('listitem');
+    expect(rows[0]).toHaveTextContent(/Argon\s*Answered$/);
+    expect(rows[1]).toHaveTextContent(/Not yet answered$/);
+    expect(screen.getByRole('list', { name: 'Answers so far' })).not.toHaveTextContent(/of \d answered/);
+  });
+
   it('sends the command of each shortcut key for the state on screen, and ignores keys while typing', async () => {
     const { socket } = await renderHost(makeRunningView());
     await screen.findByRole('list', { name: 'Options' });

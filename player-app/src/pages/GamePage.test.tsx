@@ -63,6 +63,16 @@ describe(GamePage.name, () => {
     expect(await screen.findByRole('alert')).toHaveTextContent("Time was up — your answer didn't count this round.");
   });
 
+  it('says the round is closed, not that time ran out, when everyone answered early', async () => {
+    const { fake, user, server } = await startGame(sessionView({ status: 'running', round: round() }));
+    fake.respond('answer:submit', ACCEPTED);
+    await user.click(screen.getByRole('button', { name: 'A. On the bench' }));
+    server('round:closed', { roundIndex: 0 });
+    expect(await screen.findByRole('heading', { level: 1, name: 'Round closed' })).toBeInTheDocument();
+    expect(screen.getByText('Your answer: A. On the bench')).toBeInTheDocument();
+    expect(screen.queryByText(/time's up/i)).not.toBeInTheDocument();
+  });
+
   it("huddle: shows teammates' live votes beside options and locks in the shared vote", async () => {
     const { fake, user, server } = await startGame(sessionView({ status: 'running', format: 'huddle', round: round() }));
     server('round:votes', {

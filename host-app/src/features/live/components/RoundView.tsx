@@ -20,7 +20,7 @@ export function RoundView({ view, round }: RoundViewProps) {
         <ItemDisplay item={round.item} />
         <aside className="host-panel host-main" aria-label="Round status">
           <Countdown timing={round.timing} />
-          <TeamProgress teams={view.teams} progress={round.progress} />
+          <TeamProgress teams={view.teams} progress={round.progress} format={view.session.format} />
         </aside>
       </div>
       <HostControls view={view} />

@@ -39,7 +39,7 @@ export function TeamSwatch({ colour, pattern, size = 40 }: TeamSwatchProps) {
   const id = `team-pattern-${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
   const ink = inkFor(colour);
   return (
-    <svg width={size} height={size} viewBox="0 0 36 36" role="img" aria-label={`${pattern} on ${teamColourName(colour)}`}>
+    <svg width={size} height={size} viewBox="0 0 36 36" style={{ flexShrink: 0 }} role="img" aria-label={`${pattern} on ${teamColourName(colour)}`}>
       <defs>
         <pattern id={id} width="12" height="12" patternUnits="userSpaceOnUse">
           {tile(pattern, ink)}

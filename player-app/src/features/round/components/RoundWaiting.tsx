@@ -19,7 +19,7 @@ export function RoundWaiting({ round }: RoundWaitingProps) {
         Round {round.timing.roundIndex + 1} of {round.itemCount}
       </p>
       <h1 id="waiting-title" className="prompt">
-        {closed ? "Time's up" : 'Get ready — the next round opens soon'}
+        {closed ? 'Round closed' : 'Get ready — the next round opens soon'}
       </h1>
       {closed && (
         <>
