@@ -21,8 +21,11 @@ const STEPS = smoke ? [300] : arg('steps', '300,1500,3000,5000').split(',').map(
 const PATTERNS = smoke ? ['spread'] : arg('patterns', 'spread,burst').split(',');
 const TRIALS = smoke ? 1 : Number(arg('trials', 5));
 const ROUNDS = smoke ? 2 : Number(arg('rounds', 4));
-const REAL_PORT = 3200;
-const ECHO_PORT = 3300;
+import { createServer } from 'node:net';
+// Free loopback ports, so a stray process on a fixed port can never answer for our server.
+const freePort = () => new Promise((resolve) => { const srv = createServer(); srv.listen(0, '127.0.0.1', () => { const { port } = srv.address(); srv.close(() => resolve(port)); }); });
+const REAL_PORT = await freePort();
+const ECHO_PORT = await freePort();
 const DATABASE_URL = process.env.DATABASE_URL;
 if (!DATABASE_URL) throw new Error('DATABASE_URL is not set: run through `npm run bench`');
 const demo = JSON.parse(readFileSync(join(root, 'fixtures/demo/staff.json'), 'utf8'));
@@ -31,6 +34,10 @@ const hasTaskset = (() => { try { execFileSync('taskset', ['-c', '0', 'true']); 
 const pin = (core, cmd, args) => (hasTaskset ? ['taskset', ['-c', String(core), cmd, ...args]] : [cmd, args]);
 const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
+const children = new Set();
+// Whatever happens to the harness, it takes its servers down with it.
+process.on('exit', () => { for (const c of children) if (c.exitCode === null) c.kill('SIGKILL'); });
+
 function start(name, core, cmd, args, env = {}) {
   const [c, a] = pin(core, cmd, args);
   const child = spawn(c, a, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
@@ -38,13 +45,15 @@ function start(name, core, cmd, args, env = {}) {
   child.stdout.on('data', (d) => (log += d));
   child.stderr.on('data', (d) => (log += d));
   child.logText = () => log;
+  children.add(child);
   child.label = name;
   return child;
 }
 
-async function waitFor(url, ms = 30000) {
+async function waitFor(url, ms = 30000, child = null) {
   const end = Date.now() + ms;
   while (Date.now() < end) {
+    if (child && child.exitCode !== null) throw new Error(`${child.label} exited early:\n${child.logText()}`);
     try { const r = await fetch(url); if (r.ok) return; } catch {}
     await sleep(200);
   }
@@ -68,13 +77,13 @@ async function startReal() {
     APP_SECRET: 'bench-secret-bench-secret-bench-secret-01', PUBLIC_URL: `http://127.0.0.1:${REAL_PORT}`,
     BENCH_METRICS: 'true', PLAY_JOIN_LIMIT: '100000', DATABASE_POOL_SIZE: '20',
   });
-  await waitFor(`http://127.0.0.1:${REAL_PORT}/api/health`);
+  await waitFor(`http://127.0.0.1:${REAL_PORT}/api/health`, 30000, child);
   return child;
 }
 
 async function startEcho() {
   const child = start('echo', 1, process.execPath, ['--expose-gc', 'bench/echo-server.mjs', String(ECHO_PORT)]);
-  await waitFor(`http://127.0.0.1:${ECHO_PORT}/api/bench/metrics`);
+  await waitFor(`http://127.0.0.1:${ECHO_PORT}/api/bench/metrics`, 30000, child);
   return child;
 }
 
@@ -195,6 +204,7 @@ function markdown(report) {
 
 async function main() {
   const db = new pg.Client({ connectionString: DATABASE_URL });
+  db.on('error', (err) => { console.error(`database connection lost: ${err.message}`); process.exit(1); });
   await db.connect();
   const report = { when: new Date().toISOString(), smoke, trials: TRIALS, rounds: ROUNDS, versions: versions(), cells: [], mixer: mixerFigure(), bundle: bundleFigure() };
   let failures = [];

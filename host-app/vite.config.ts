@@ -25,5 +25,7 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     restoreMocks: true,
     unstubGlobals: true,
+    // Form-heavy page tests take seconds on a loaded 2-core machine; the default 5 s is too tight.
+    testTimeout: 20_000,
   },
 });

@@ -42,6 +42,11 @@ export const routes = {
   hostSession: { path: '/host/:sessionId', build: (sessionId: string) => `/host/${segment(sessionId)}` },
   debriefs: { path: '/debriefs', build: () => '/debriefs' },
   debrief: { path: '/debriefs/:sessionId', build: (sessionId: string) => `/debriefs/${segment(sessionId)}` },
+  debriefItem: {
+    path: '/debriefs/:sessionId/items/:itemId',
+    build: (sessionId: string, itemId: string) => `/debriefs/${segment(sessionId)}/items/${segment(itemId)}`,
+  },
+  classTrends: { path: '/classes/:classId/trends', build: (classId: string) => `/classes/${segment(classId)}/trends` },
   adminStaff: { path: '/admin/staff', build: () => '/admin/staff' },
 } as const;
 

@@ -65,4 +65,12 @@ export const apiPaths = {
 
   sessions: '/api/sessions',
   session: (sessionId: string) => `/api/sessions/${id(sessionId)}`,
+
+  debriefs: '/api/debriefs',
+  debrief: (sessionId: string) => `/api/sessions/${id(sessionId)}/debrief`,
+  debriefItem: (sessionId: string, itemId: string) => `/api/sessions/${id(sessionId)}/debrief/items/${id(itemId)}`,
+  debriefEmail: (sessionId: string) => `/api/sessions/${id(sessionId)}/debrief/email`,
+  gradebookCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/gradebook.csv`,
+  itemAnalysisCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/item-analysis.csv`,
+  classTrends: (classId: string) => `/api/classes/${id(classId)}/trends`,
 } as const;

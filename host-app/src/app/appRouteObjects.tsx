@@ -64,6 +64,18 @@ export const appRouteObjects: RouteObject[] = [
                 lazy: async () => ({ Component: (await import('@/pages/DebriefsPage')).DebriefsPage }),
               },
               {
+                path: routes.debrief.path,
+                lazy: async () => ({ Component: (await import('@/pages/DebriefPage')).DebriefPage }),
+              },
+              {
+                path: routes.debriefItem.path,
+                lazy: async () => ({ Component: (await import('@/pages/DebriefItemPage')).DebriefItemPage }),
+              },
+              {
+                path: routes.classTrends.path,
+                lazy: async () => ({ Component: (await import('@/pages/ClassTrendsPage')).ClassTrendsPage }),
+              },
+              {
                 element: <RequireAdmin />,
                 children: [
                   {

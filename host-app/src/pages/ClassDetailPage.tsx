@@ -68,6 +68,9 @@ export function ClassDetailPage() {
             {data.archivedAt ? 'Unarchive class' : 'Archive class'}
           </Button>
         )}
+        <Button asChild variant="soft" color="gray">
+          <Link to={routes.classTrends.build(classId)}>Trends by tag</Link>
+        </Button>
         <Button asChild variant="ghost" color="gray">
           <Link to={routes.classes.build()}>All classes</Link>
         </Button>

@@ -1,0 +1,81 @@
+import type { DebriefStudentDto, MissedItemDto } from '@covalent/shared-types';
+import { Table, Text } from '@radix-ui/themes';
+import { formatShare } from '../utils/formatFigure';
+import { FigureText } from './FigureText';
+
+export interface StudentsTableProps {
+  students: DebriefStudentDto[];
+}
+
+const studentName = (s: DebriefStudentDto): string => s.rosterName ?? s.nickname;
+
+function MissedList({ missed }: { missed: MissedItemDto[] }) {
+  if (missed.length === 0) return <Text color="gray">None</Text>;
+  return (
+    <ul style={{ margin: 0, paddingLeft: '1.1em' }}>
+      {[...missed]
+        .sort((a, b) => a.position - b.position)
+        .map((m) => (
+          <li key={m.itemId}>
+            <Text weight="bold">Item {m.position + 1}</Text> {m.prompt}
+            <br />
+            <Text size="2">
+              Answer: {m.answered ? m.answerText : 'not answered'} · Key: {m.keyText}
+              {m.credit > 0 && ` · partial credit ${m.credit.toFixed(2)}`}
+            </Text>
+          </li>
+        ))}
+    </ul>
+  );
+}
+
+/** Each student's score and the items they missed, their answer beside the key. */
+export function StudentsTable({ students }: StudentsTableProps) {
+  const sorted = [...students].sort((a, b) => studentName(a).localeCompare(studentName(b)));
+  return (
+    <Table.Root variant="surface">
+      <caption className="visually-hidden">Students</caption>
+      <Table.Header>
+        <Table.Row>
+          <Table.ColumnHeaderCell>Student</Table.ColumnHeaderCell>
+          <Table.ColumnHeaderCell>Score</Table.ColumnHeaderCell>
+          <Table.ColumnHeaderCell>Percent</Table.ColumnHeaderCell>
+          <Table.ColumnHeaderCell>Answered</Table.ColumnHeaderCell>
+          <Table.ColumnHeaderCell>Missed items</Table.ColumnHeaderCell>
+        </Table.Row>
+      </Table.Header>
+      <Table.Body>
+        {sorted.map((s) =>
+          s.removed ? (
+            <Table.Row key={s.playerId}>
+              <Table.RowHeaderCell>{studentName(s)}</Table.RowHeaderCell>
+              <Table.Cell colSpan={4}>
+                <Text color="gray">Data removed; in no figure.</Text>
+              </Table.Cell>
+            </Table.Row>
+          ) : (
+            <Table.Row key={s.playerId}>
+              <Table.RowHeaderCell>
+                {studentName(s)}
+                {s.rosterName && s.rosterName !== s.nickname && (
+                  <Text color="gray" size="2">
+                    {' '}
+                    ({s.nickname})
+                  </Text>
+                )}
+              </Table.RowHeaderCell>
+              <Table.Cell>{s.score === null ? '—' : s.score.toFixed(2)}</Table.Cell>
+              <Table.Cell>
+                <FigureText figure={s.percent} format={formatShare} />
+              </Table.Cell>
+              <Table.Cell>{s.answered}</Table.Cell>
+              <Table.Cell>
+                <MissedList missed={s.missed} />
+              </Table.Cell>
+            </Table.Row>
+          ),
+        )}
+      </Table.Body>
+    </Table.Root>
+  );
+}
