@@ -5,6 +5,7 @@
 export const ROUTES = {
   join: '',
   joinWithCode: 'join/:code',
+  catchup: 'catchup/:code',
 } as const;
 
 const base = import.meta.env.BASE_URL;
@@ -12,4 +13,6 @@ const base = import.meta.env.BASE_URL;
 export const paths = {
   /** `/play/` or `/play/join/ABC234`: what a QR code on the host screen can open. */
   join: (code?: string): string => (code ? `${base}join/${encodeURIComponent(code)}` : base),
+  /** `/play/catchup/ABC234`: a self-paced catch-up from the teacher's debrief. */
+  catchup: (code: string): string => `${base}catchup/${encodeURIComponent(code)}`,
 };

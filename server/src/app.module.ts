@@ -3,6 +3,7 @@ import { ConfigModule, ConfigType } from '@nestjs/config';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
 import { BanksModule } from './banks/banks.module';
+import { CatchupModule } from './catchup/catchup.module';
 import { ClassesModule } from './classes/classes.module';
 import { DebriefModule } from './debrief/debrief.module';
 import { appConfig } from './config/app.config';
@@ -33,6 +34,7 @@ import { UsersModule } from './users/users.module';
     ClassesModule,
     SessionsModule,
     DebriefModule,
+    CatchupModule,
     RetentionModule,
   ],
 })

@@ -3,3 +3,4 @@ export * from './api';
 export * from './authoring';
 export * from './protocol';
 export * from './debrief';
+export * from './catchup';

@@ -15,6 +15,9 @@ import { SessionPlayerEntity } from '../sessions/entities/session-player.entity'
 import { SessionRoundEntity } from '../sessions/entities/session-round.entity';
 import { SessionTeamEntity } from '../sessions/entities/session-team.entity';
 import { SessionEntity } from '../sessions/entities/session.entity';
+import { CatchupEntity } from '../catchup/entities/catchup.entity';
+import { CatchupCardEntity } from '../catchup/entities/catchup-card.entity';
+import { CatchupAnswerEntity } from '../catchup/entities/catchup-answer.entity';
 
 /** Every entity, for the app's TypeORM module and the migrations CLI alike. */
 export const ENTITIES = [
@@ -35,5 +38,8 @@ export const ENTITIES = [
   SessionPlayerEntity,
   SessionRoundEntity,
   ResponseEntity,
+  CatchupEntity,
+  CatchupCardEntity,
+  CatchupAnswerEntity,
 ];
 

@@ -1,0 +1,14 @@
+export { catchupApi } from './api/catchupApi';
+export type { CatchupFailure, CatchupResult } from './api/catchupApi';
+export { CatchupFeedback } from './components/CatchupFeedback';
+export type { CatchupFeedbackProps } from './components/CatchupFeedback';
+export { CatchupFinish } from './components/CatchupFinish';
+export type { CatchupFinishProps } from './components/CatchupFinish';
+export { CatchupPicker } from './components/CatchupPicker';
+export type { CatchupPickerProps } from './components/CatchupPicker';
+export { CatchupQuestion } from './components/CatchupQuestion';
+export type { CatchupQuestionProps } from './components/CatchupQuestion';
+export { useCatchup } from './hooks/useCatchup';
+export type { Catchup, CatchupState } from './hooks/useCatchup';
+export { nextReviewText } from './utils/nextReviewText';
+export { readCatchupCode } from './utils/readCatchupCode';
