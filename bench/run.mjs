@@ -95,12 +95,12 @@ async function stop(child) {
 }
 
 async function benchBank() {
-  const signIn = await fetch(`http://127.0.0.1:${REAL_PORT}/api/auth/sign-in`, {
+  const signIn = await fetchRetry(`http://127.0.0.1:${REAL_PORT}/api/auth/sign-in`, {
     method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: teacher.email, password: teacher.password }),
   });
   const cookie = String(signIn.headers.get('set-cookie')).split(';')[0];
   const api = async (method, path, body) => {
-    const r = await fetch(`http://127.0.0.1:${REAL_PORT}${path}`, { method, headers: { 'content-type': 'application/json', cookie }, body: body && JSON.stringify(body) });
+    const r = await fetchRetry(`http://127.0.0.1:${REAL_PORT}${path}`, { method, headers: { 'content-type': 'application/json', cookie }, body: body && JSON.stringify(body) });
     const j = await r.json();
     if (!r.ok) throw new Error(`${method} ${path}: ${r.status} ${JSON.stringify(j)}`);
     return j;
@@ -122,8 +122,15 @@ function runLoad(options) {
   return JSON.parse(out.trim().split('\n').pop());
 }
 
+// A kept-alive connection the server has just closed fails once; ask again on a new one.
+async function fetchRetry(url, init) {
+  for (let i = 0; ; i++) {
+    try { return await fetch(url, init); } catch (err) { if (i >= 2) throw err; await sleep(100); }
+  }
+}
+
 async function metrics(port, reset = false) {
-  const r = await fetch(`http://127.0.0.1:${port}/api/bench/metrics${reset ? '/reset' : ''}`, { method: reset ? 'POST' : 'GET' });
+  const r = await fetchRetry(`http://127.0.0.1:${port}/api/bench/metrics${reset ? '/reset' : ''}`, { method: reset ? 'POST' : 'GET' });
   return r.json();
 }
 
@@ -251,4 +258,8 @@ async function main() {
   console.log(smoke ? 'bench-smoke: 1 passed, 0 failed' : '');
 }
 
-main().catch((err) => { console.error(err); process.exit(1); });
+main().catch((err) => {
+  console.error(err);
+  for (const c of children) console.error(`--- ${c.label} (exit ${c.exitCode}) log tail ---\n${c.logText().slice(-3000)}`);
+  process.exit(1);
+});
