@@ -70,6 +70,7 @@ export const apiPaths = {
   debrief: (sessionId: string) => `/api/sessions/${id(sessionId)}/debrief`,
   debriefItem: (sessionId: string, itemId: string) => `/api/sessions/${id(sessionId)}/debrief/items/${id(itemId)}`,
   debriefEmail: (sessionId: string) => `/api/sessions/${id(sessionId)}/debrief/email`,
+  sessionCatchups: (sessionId: string) => `/api/sessions/${id(sessionId)}/catchups`,
   gradebookCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/gradebook.csv`,
   itemAnalysisCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/item-analysis.csv`,
   classTrends: (classId: string) => `/api/classes/${id(classId)}/trends`,

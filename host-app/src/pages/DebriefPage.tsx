@@ -1,6 +1,7 @@
 import { Button, Flex, Heading, Text } from '@radix-ui/themes';
 import { Link, useParams } from 'react-router-dom';
 import { ApiRequestError } from '@/api/client';
+import { CreateCatchup } from '@/features/debrief/components/CreateCatchup';
 import { DebriefActions } from '@/features/debrief/components/DebriefActions';
 import { DebriefSummary } from '@/features/debrief/components/DebriefSummary';
 import { ItemAnalysisTable } from '@/features/debrief/components/ItemAnalysisTable';
@@ -48,6 +49,7 @@ export function DebriefPage() {
         </Button>
       </Flex>
       <DebriefActions sessionId={d.sessionId} />
+      {d.classId && <CreateCatchup sessionId={d.sessionId} />}
       <section aria-labelledby="summary-heading">
         <Heading as="h2" size="5" id="summary-heading" mb="3">
           Summary

@@ -1,0 +1,166 @@
+import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { io, type Socket } from 'socket.io-client';
+import { demoTeacher } from './fixtures';
+
+/*
+ * After the bell: a short solo session is played over real sockets from the test process (the
+ * live screens have their own suite), then the teacher works through the debrief in the browser.
+ * Speed is off (speed weight 0), so points are 1000 · credit (DESIGN.md §4).
+ */
+
+const MAIL_HTTP_PORT = Number(process.env.E2E_MAIL_HTTP_PORT ?? 8126);
+
+interface BankItem {
+  id: string;
+  type: string;
+  options: { id: string; text: string }[];
+  key: { type: string; correctOptionId?: string; value?: boolean };
+}
+
+async function signIn(page: Page): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel(/e-mail/i).fill(demoTeacher.email);
+  await page.getByLabel(/^password/i).fill(demoTeacher.password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(demoTeacher.displayName);
+}
+
+function connect(baseURL: string, path: string, auth: object, cookie?: string): Promise<Socket> {
+  return new Promise((resolve, reject) => {
+    const s = io(baseURL + path, { transports: ['websocket'], auth, extraHeaders: cookie ? { cookie } : undefined, forceNew: true });
+    s.once('connect', () => resolve(s));
+    s.once('connect_error', reject);
+  });
+}
+
+/** Plays three single/true-false items with four players: player i answers item r right when (i + r) is even. */
+async function playSession(
+  request: APIRequestContext,
+  baseURL: string,
+  cookie: string,
+): Promise<{ sessionId: string; title: string; students: string[] }> {
+  const banks = (await (await request.get('/api/banks')).json()) as { id: string; title: string }[];
+  const bank = banks.find((b) => /safety equipment/i.test(b.title))!;
+  const items = ((await (await request.get(`/api/banks/${bank.id}/items`)).json()) as BankItem[])
+    .filter((i) => i.type === 'single' || i.type === 'truefalse')
+    .slice(0, 3);
+  expect(items).toHaveLength(3);
+  const classes = (await (await request.get('/api/classes')).json()) as { id: string; name: string; period: string | null }[];
+  const period2 = classes.find((c) => c.name === 'Chemistry' && c.period === '2')!;
+  const created = await request.post('/api/sessions', {
+    data: {
+      bankId: bank.id, itemIds: items.map((i) => i.id), classId: period2.id, format: 'solo', roundSeconds: 60, speedWeight: 0,
+      standings: 'full', targetTeamSize: 2, mixerMode: 'random', namePack: 'elements',
+    },
+  });
+  expect(created.status()).toBe(201);
+  const session = (await created.json()) as { id: string; joinCode: string };
+  const host = await connect(baseURL, '/host', { sessionId: session.id, protocolVersion: 1 }, cookie);
+  const command = async (type: string, allow: string[] = []) => {
+    const ack = await host.timeout(10_000).emitWithAck('host:command', { type });
+    if (!ack.ok && !allow.includes(ack.error)) throw new Error(`${type}: ${ack.error} ${ack.message}`);
+  };
+  // Students pick themselves from the class list, so the catch-up can find them again.
+  const info = (await (await request.get(`/api/play/sessions/${session.joinCode}`)).json()) as { roster: { id: string; displayName: string }[] };
+  const picked = info.roster.slice(0, 4);
+  const players: Socket[] = [];
+  for (const entry of picked) {
+    const join = await request.post('/api/play/join', { data: { code: session.joinCode, rosterEntryId: entry.id } });
+    expect(join.ok()).toBe(true);
+    const { playerToken } = (await join.json()) as { playerToken: string };
+    players.push(await connect(baseURL, '/play', { token: playerToken, protocolVersion: 1 }));
+  }
+  await command('start');
+  for (let r = 0; r < items.length; r++) {
+    if (r > 0) await command('next');
+    await command('open_round');
+    const item = items[r];
+    for (let i = 0; i < players.length; i++) {
+      const right = (i + r) % 2 === 0;
+      const response =
+        item.type === 'truefalse'
+          ? { type: 'truefalse', value: right ? item.key.value : !item.key.value }
+          : { type: 'single', optionId: right ? item.key.correctOptionId : item.options.find((o) => o.id !== item.key.correctOptionId)!.id };
+      const ack = await players[i].timeout(10_000).emitWithAck('answer:submit', { clientMessageId: `e2e-${r}-${i}`, roundIndex: r, response });
+      expect(ack.ok).toBe(true);
+    }
+    await command('close_round', ['round_not_open']); // closes by itself once everyone answered
+    await command('reveal');
+  }
+  await command('end');
+  for (const s of [host, ...players]) s.close();
+  return { sessionId: session.id, title: bank.title, students: picked.map((e) => e.displayName) };
+}
+
+test('the teacher reads, sorts, exports and sends the debrief of a played session', async ({ page, baseURL }) => {
+  await signIn(page);
+  const cookie = (await page.context().cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
+  const { sessionId, title, students } = await playSession(page.request, baseURL!, cookie);
+
+  await page.getByRole('navigation').getByRole('link', { name: 'Debriefs' }).click();
+  await page.locator(`a[href$="/debriefs/${sessionId}"]`).first().click();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(title);
+
+  // Half the answers were right on every item: p = 2/4 = 0.5 each (mean credit, DESIGN.md §6).
+  const items = page.getByRole('table', { name: 'Item analysis' });
+  await expect(items.getByRole('row')).toHaveCount(4); // header + 3 items
+  const pHeader = items.getByRole('columnheader', { name: /^p/ });
+  await pHeader.getByRole('button').click();
+  await expect(pHeader).toHaveAttribute('aria-sort', /descending|ascending/);
+  await expect(items.getByText('0.50').first()).toBeVisible();
+
+  const studentTable = page.getByRole('table', { name: 'Students' });
+  await expect(studentTable.getByRole('row')).toHaveCount(5); // header + 4 students
+
+  // Both CSVs download with their headers.
+  for (const [name, header] of [
+    [/gradebook/i, /student/i],
+    [/item analysis/i, /item/i],
+  ] as const) {
+    const download = page.waitForEvent('download');
+    await page.getByRole('link', { name }).click();
+    const file = await (await download).path();
+    const text = readFileSync(file!, 'utf8').replace(/^\uFEFF/, '');
+    expect(text.split(/\r?\n/)[0]).toMatch(header);
+    expect(text.trim().split(/\r?\n/).length).toBeGreaterThanOrEqual(4);
+  }
+
+  // The e-mail reaches the local SMTP catcher with the gradebook attached.
+  await page.getByRole('button', { name: /send to me and co-teachers/i }).click();
+  await expect(page.getByText(/debrief sent/i)).toBeVisible();
+  await expect
+    .poll(async () => {
+      const messages = (await (await fetch(`http://127.0.0.1:${MAIL_HTTP_PORT}/messages`)).json()) as {
+        to: string[];
+        attachments: { filename: string }[];
+      }[];
+      return messages.some((m) => m.to.includes(demoTeacher.email) && m.attachments.some((a) => a.filename.endsWith('.csv')));
+    })
+    .toBe(true);
+
+  // The first student missed item 2 of 3 (right when (0 + r) is even): a catch-up of that one.
+  await page.getByRole('button', { name: 'Create catch-up' }).click();
+  const code = (await page.getByTestId('catchup-code').textContent())!.trim();
+  const phone = await page.context().browser()!.newContext({ viewport: { width: 360, height: 740 } });
+  const student = await phone.newPage();
+  await student.goto(`/play/catchup/${code}`);
+  await student.getByLabel(students[0]).check();
+  await student.getByRole('button', { name: 'Start' }).click();
+  let answered = 0;
+  while (!(await student.getByRole('heading', { name: /all done for today/i }).isVisible())) {
+    await student.getByRole('list', { name: 'Options' }).getByRole('button').first().click();
+    await student.getByRole('button', { name: 'Check answer' }).click();
+    await expect(student.getByRole('heading', { name: 'Why' }).or(student.getByRole('heading', { name: 'The right answer' })).first()).toBeVisible();
+    answered += 1;
+    await student.getByRole('button', { name: /next item|see how you did/i }).click();
+    expect(answered).toBeLessThanOrEqual(3);
+  }
+  expect(answered).toBe(1);
+  await expect(student.getByText(/of 1 right/)).toBeVisible();
+  await phone.close();
+
+  // An item page shows its distractor table.
+  await items.getByRole('link').first().click();
+  await expect(page.getByRole('table', { name: 'Distractor analysis' })).toBeVisible();
+});

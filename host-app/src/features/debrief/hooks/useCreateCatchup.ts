@@ -1,0 +1,12 @@
+import type { CreateCatchupResponse } from '@covalent/shared-types';
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '@/api/client';
+import { apiPaths } from '@/api/apiPaths';
+import type { ApiRequestError } from '@/api/client';
+
+/** Turns the session's missed items into a self-paced catch-up for the class. */
+export function useCreateCatchup(sessionId: string) {
+  return useMutation<CreateCatchupResponse, ApiRequestError>({
+    mutationFn: () => apiClient.post<CreateCatchupResponse>(apiPaths.sessionCatchups(sessionId)),
+  });
+}
