@@ -63,6 +63,14 @@ export class MediaService {
     return { media, bytes };
   }
 
+  /** An image by id alone, for routes that have already proved the caller may see it. */
+  async imageById(id: string): Promise<{ media: MediaEntity; bytes: Buffer }> {
+    const media = await this.media.findOne({ where: { id } });
+    const bytes = media ? await this.storage.get(media.storageKey) : null;
+    if (!media || !bytes) throw notFound();
+    return { media, bytes };
+  }
+
   /** Whether the user may attach this image to an item: it must be an image of their school. */
   async isUsableBy(user: UserEntity, id: string): Promise<boolean> {
     return this.media.exists({ where: { id, schoolId: user.schoolId } });

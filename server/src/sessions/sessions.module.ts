@@ -4,6 +4,8 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { BanksModule } from '../banks/banks.module';
 import { ClassesModule } from '../classes/classes.module';
+import { MediaModule } from '../media/media.module';
+import { SessionImagesService } from './session-images.service';
 import { ResponseEntity } from './entities/response.entity';
 import { SessionPlayerEntity } from './entities/session-player.entity';
 import { SessionRoundEntity } from './entities/session-round.entity';
@@ -32,10 +34,12 @@ import {
     TypeOrmModule.forFeature([SessionEntity, SessionTeamEntity, SessionPlayerEntity, SessionRoundEntity, ResponseEntity]),
     BanksModule,
     ClassesModule,
+    MediaModule,
   ],
   controllers: [SessionsController, PlayController],
   providers: [
     SessionsService,
+    SessionImagesService,
     JoinService,
     LiveSessionsService,
     SessionStore,

@@ -12,7 +12,7 @@ import type {
   VoteView,
 } from '@covalent/shared-types';
 import { createRng, shuffle } from '../../mixer/domain';
-import { imageUrl } from '../../media/media.mapper';
+import { sessionImageUrl } from '../../media/media.mapper';
 import { canonicalJson, type RoundResults, type RoundState, type StandingEntry } from '../domain';
 import { REVISIT_BELOW_P } from '../sessions.constants';
 import type { LiveSession, LiveTeam } from './live-session';
@@ -26,7 +26,7 @@ export function itemView(s: LiveSession, index: number): PlayerItemView {
     prompt: item.prompt,
     options: options.map((o) => ({ id: o.id, text: o.text })),
     unitHint: item.key.type === 'numeric' ? item.key.unit : null,
-    imageUrl: item.imageId ? imageUrl(item.imageId) : null,
+    imageUrl: item.imageId ? sessionImageUrl(s.id, item.imageId) : null,
   };
 }
 
