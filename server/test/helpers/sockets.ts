@@ -9,6 +9,7 @@ import { AppModule } from '../../src/app.module';
 import { configureApp } from '../../src/app.setup';
 import { MailCatcher, startMailCatcher } from '../../src/mail/dev/mail-catcher';
 import { JoinAttemptLimiter } from '../../src/sessions/join-rate-limit.guard';
+import { SessionsModule } from '../../src/sessions/sessions.module';
 import {
   DEFAULT_PLAY_RATE_LIMIT,
   DEFAULT_SESSION_TUNING,
@@ -62,7 +63,8 @@ export async function createLiveApp(opts: LiveAppOptions = {}): Promise<LiveApp>
     db: app.get(DataSource),
     url: `http://127.0.0.1:${port}`,
     clock,
-    limiter: app.get(JoinAttemptLimiter),
+    // The sessions module's own limiter (the catch-up module keeps another, for its own codes).
+    limiter: app.select(SessionsModule).get(JoinAttemptLimiter, { strict: true }),
     async close() {
       await app.close();
       await mail.close();

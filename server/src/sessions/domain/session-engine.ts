@@ -163,6 +163,24 @@ export class SessionEngine {
     return structuredClone(this.state);
   }
 
+  /**
+   * A state to roll back to after one `submit` or `lockIn` that could not be stored. Cheaper than
+   * `toSnapshot` on the hot path: those commands change only the current round, the players and
+   * the answer bookkeeping, so earlier rounds are shared rather than copied. Pass it to
+   * `fromSnapshot` (which deep-copies it) right away; do not keep it.
+   */
+  checkpoint(): SessionState {
+    const s = this.state;
+    return {
+      ...s,
+      teams: s.teams.map((t) => ({ ...t })),
+      players: s.players.map((p) => ({ ...p })),
+      rounds: s.rounds.map((r, i) => (i === s.currentRound ? structuredClone(r) : r)),
+      callQueue: [...s.callQueue],
+      acceptances: { ...s.acceptances },
+    };
+  }
+
   // ---- reading -------------------------------------------------------------
 
   get status(): SessionState['status'] {

@@ -75,6 +75,28 @@ describe(`${SessionEngine.name} snapshots`, () => {
     ],
   };
 
+  it('rolls one submit back through checkpoint() to exactly the state toSnapshot() saw', () => {
+    // The live runtime undoes an answer it could not store; checkpoint() must be as good as a full copy.
+    const { engine } = makeSession({ ...huddleSpec, itemCount: 2 });
+    const clock = new FakeClock();
+    // A whole revealed round first, so an earlier round exists to be shared.
+    must(engine.start());
+    must(engine.openRound());
+    clock.at(1_000);
+    for (const id of ['a1', 'a2', 'b1']) must(engine.submit({ playerId: id, clientMessageId: `r1-${id}`, response: pick('a'), lock: true }));
+    if (engine.currentRound()?.status === 'open') must(engine.closeRound());
+    must(engine.reveal());
+    must(engine.next());
+    must(engine.openRound());
+    must(engine.submit({ playerId: 'b1', clientMessageId: 'r2-b1', response: pick('b') }));
+    const full = engine.toSnapshot();
+    const cheap = engine.checkpoint();
+    must(engine.submit({ playerId: 'a1', clientMessageId: 'r2-a1', response: pick('a'), lock: true }));
+    expect(engine.toSnapshot()).not.toEqual(full);
+    const rolledBack = SessionEngine.fromSnapshot(cheap, makeDeps(huddleSpec, clock), { fastForwardRng: false });
+    expect(rolledBack.toSnapshot()).toEqual(full);
+  });
+
   it('is plain JSON', () => {
     const { engine } = makeSession(huddleSpec);
     run(engine, new FakeClock(), huddleScript().slice(0, 5));

@@ -33,6 +33,8 @@ type Done = { ok: true; events: EngineEvent[] } | Fail;
 
 const fail = (error: string, message: string): Fail => ({ ok: false, error, message });
 const STORAGE_FAIL = fail('storage_unavailable', 'The server could not save that just now. Try again in a moment.');
+/** Host screens get at most one full view per session this often (ms); commands still ack with the view at once. */
+const HOST_PUSH_MS = 100;
 
 export interface JoinInput {
   nickname: string;
@@ -84,7 +86,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   private readonly live = new Map<string, LiveSession>();
   private readonly byCode = new Map<string, string>();
   private readonly hostDirty = new Set<string>();
-  private hostFlush: NodeJS.Immediate | null = null;
+  private hostFlush: NodeJS.Timeout | null = null;
   private snapshotTimer: NodeJS.Timeout | null = null;
   private readonly retention = new Set<NodeJS.Timeout>();
   private shuttingDown = false;
@@ -118,7 +120,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   async onModuleDestroy(): Promise<void> {
     this.shuttingDown = true;
     if (this.snapshotTimer) clearInterval(this.snapshotTimer);
-    if (this.hostFlush) clearImmediate(this.hostFlush);
+    if (this.hostFlush) clearTimeout(this.hostFlush);
     for (const t of this.retention) clearTimeout(t);
     for (const s of this.live.values()) {
       if (s.timer) clearTimeout(s.timer);
@@ -661,7 +663,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
       const response = parseResponse(payload.response, item);
       if (!response.ok) return response;
       const player = s.players.get(playerId);
-      const before = s.engine.toSnapshot();
+      const before = s.engine.checkpoint();
       const at = this.clock.now();
       const result = s.engine.submit({ playerId, clientMessageId: payload.clientMessageId, response: response.value, at, lock: payload.lock });
       if (!result.ok) {
@@ -709,7 +711,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
     return s.queue.run(async () => {
       const round = s.engine.currentRound();
       if (!round || round.index !== roundIndex) return fail('round_not_open', 'That round is not open.');
-      const before = s.engine.toSnapshot();
+      const before = s.engine.checkpoint();
       const at = this.clock.now();
       const result = s.engine.lockIn({ playerId, at });
       if (!result.ok) return result;
@@ -776,14 +778,15 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   private markHostDirty(s: LiveSession): void {
     this.hostDirty.add(s.id);
     if (this.hostFlush) return;
-    this.hostFlush = setImmediate(() => {
+    // At most one full host view per session every HOST_PUSH_MS: a burst of answers is one refresh.
+    this.hostFlush = setTimeout(() => {
       this.hostFlush = null;
       for (const id of this.hostDirty) {
         const live = this.live.get(id);
         if (live && !this.shuttingDown) this.emitter.toHosts(id, 'host:state', hostView(live));
       }
       this.hostDirty.clear();
-    });
+    }, HOST_PUSH_MS);
   }
 
   private stateToTeam(s: LiveSession, teamId: string): void {
