@@ -114,6 +114,7 @@ async function main() {
   const cpuStart = process.cpuUsage();
   const wallStart = performance.now();
   const latencies = [];
+  const ackedIds = [];
   let acked = 0, duplicatesAbsorbed = 0, duplicateMiscounted = 0, timeouts = 0, refused = 0, lateRefused = 0, lateAccepted = 0;
   const fanout = [];
   const totalRounds = opts.rounds + 1;
@@ -148,6 +149,7 @@ async function main() {
             const done = performance.now();
             if (ack?.ok) {
               acked += 1;
+              ackedIds.push(id);
               if (measured) { latencies.push(done - intended); measuredAnswers += 1; }
               if (duplicate) {
                 const again = await p.socket.timeout(opts.ackTimeoutMs).emitWithAck('answer:submit', payload);
@@ -191,6 +193,7 @@ async function main() {
     fanout: summarise(fanout),
     generator: { eventLoopP99Ms: Math.max(0, loop.percentile(99) / 1e6 - 10), cpuShare: (cpu.user + cpu.system) / 1000 / wall },
     sessionIds: sessions.map((s) => s.id),
+    ackedIds,
   };
   for (const p of players) p.socket.close();
   for (const s of sessions) s.host.socket.close();
