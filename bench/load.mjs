@@ -197,7 +197,8 @@ async function main() {
   };
   for (const p of players) p.socket.close();
   for (const s of sessions) s.host.socket.close();
-  console.log(JSON.stringify(result));
+  // Exit only once the (long) line is flushed: a pipe cut short would lose the result.
+  await new Promise((resolve) => process.stdout.write(`${JSON.stringify(result)}\n`, resolve));
 }
 
 main().then(() => process.exit(0), (err) => { console.error(err); process.exit(1); });

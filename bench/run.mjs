@@ -222,6 +222,15 @@ function markdown(report) {
   return lines.join('\n');
 }
 
+function writeReport(report) {
+  mkdirSync(join(root, 'bench/results'), { recursive: true });
+  const md = markdown(report);
+  const stamp = report.when.replace(/[:.]/g, '-');
+  writeFileSync(join(root, `bench/results/${report.smoke ? 'smoke' : 'bench'}-${stamp}.json`), JSON.stringify(report, null, 2));
+  if (!report.smoke) writeFileSync(join(root, 'bench/RESULTS.md'), md + '\n');
+  return md;
+}
+
 async function main() {
   const db = new pg.Client({ connectionString: DATABASE_URL });
   db.on('error', (err) => { console.error(`database connection lost: ${err.message}`); process.exit(1); });
@@ -250,6 +259,7 @@ async function main() {
         const b0 = median(cells.echo.trials.map((r) => r.latency.p99));
         cells.real.ratioP99 = b0 ? median(cells.real.trials.map((r) => r.latency.p99)) / b0 : null;
         report.cells.push(cells.echo, cells.real);
+        writeReport(report); // after every cell, so a cut-short run keeps what it measured
       }
     } finally {
       await stop(real);
@@ -257,11 +267,7 @@ async function main() {
     }
   }
   await db.end();
-  mkdirSync(join(root, 'bench/results'), { recursive: true });
-  const md = markdown(report);
-  const stamp = report.when.replace(/[:.]/g, '-');
-  writeFileSync(join(root, `bench/results/${smoke ? 'smoke' : 'bench'}-${stamp}.json`), JSON.stringify(report, null, 2));
-  if (!smoke) writeFileSync(join(root, 'bench/RESULTS.md'), md + '\n');
+  const md = writeReport(report);
   console.log(md);
   if (failures.length) {
     console.log(`\ncorrectness failures:\n${failures.join('\n')}`);
