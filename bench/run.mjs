@@ -75,7 +75,7 @@ async function startReal() {
   const child = start('real', 1, process.execPath, ['--expose-gc', 'server/dist/main.js'], {
     NODE_ENV: 'production', PORT: String(REAL_PORT), HOST: '127.0.0.1', LOG_LEVEL: 'warn', DATABASE_URL,
     APP_SECRET: 'bench-secret-bench-secret-bench-secret-01', PUBLIC_URL: `http://127.0.0.1:${REAL_PORT}`,
-    BENCH_METRICS: 'true', PLAY_JOIN_LIMIT: '100000', DATABASE_POOL_SIZE: '20',
+    BENCH_METRICS: 'true', PLAY_JOIN_LIMIT: '100000', SIGNIN_LIMIT: '100000', DATABASE_POOL_SIZE: '20',
   });
   await waitFor(`http://127.0.0.1:${REAL_PORT}/api/health`, 30000, child);
   return child;
