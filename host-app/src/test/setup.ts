@@ -12,3 +12,7 @@ class NoopResizeObserver {
   disconnect(): void {}
 }
 globalThis.ResizeObserver ??= NoopResizeObserver;
+
+// Lazy pages (the chart page pulls in recharts) can take over a second to load on a busy 2-core machine.
+import { configure } from '@testing-library/react';
+configure({ asyncUtilTimeout: 8_000 });
