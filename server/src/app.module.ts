@@ -11,6 +11,7 @@ import { databaseConfig } from './config/database.config';
 import { mailConfig } from './config/mail.config';
 import { validateEnv } from './config/env.validation';
 import { dataSourceOptions } from './database/data-source';
+import { HistoryModule } from './history/history.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MediaModule } from './media/media.module';
@@ -35,6 +36,7 @@ import { UsersModule } from './users/users.module';
     SessionsModule,
     DebriefModule,
     CatchupModule,
+    HistoryModule,
     RetentionModule,
   ],
 })

@@ -161,4 +161,109 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     const res = await (await signedIn(http, teacher)).post(`/api/sessions/${sessionId}/catchups`).expect(409);
     expect(res.body.error).toBe('not_a_class_session');
   });
+  it('lists a session\u2019s catch-ups with box counts and accuracy, and closing stops the code but keeps the results', async () => {
+    const { agent, sessionId, tf, ben } = await endedClassSession();
+    expect((await agent.get(`/api/sessions/${sessionId}/catchups`).expect(200)).body).toEqual([]);
+    const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    const { token } = await started(code, ben.id);
+    await answer(token, tf.id, { type: 'truefalse', value: false }).expect(200);
+
+    const [listed] = (await agent.get(`/api/sessions/${sessionId}/catchups`).expect(200)).body;
+    // Ana's card untouched in box 1; Ben's answered right, now in box 2 (Leitner's rule).
+    expect(listed).toMatchObject({
+      id,
+      code,
+      closedAt: null,
+      studentCount: 2,
+      startedCount: 1,
+      cardCount: 2,
+      clearedCount: 1,
+      boxCounts: [1, 1, 0, 0, 0],
+      attempts: 1,
+      correctAttempts: 1,
+      accuracy: { value: 1, reason: null },
+    });
+
+    now += 60_000;
+    const closed = (await agent.post(`/api/sessions/${sessionId}/catchups/${id}/close`).expect(200)).body;
+    expect(closed.closedAt).toBe(new Date(now).toISOString());
+    now += 60_000;
+    // Closing again changes nothing.
+    expect((await agent.post(`/api/sessions/${sessionId}/catchups/${id}/close`).expect(200)).body.closedAt).toBe(closed.closedAt);
+
+    expect((await request(http).get(`/api/play/catchups/${code}`).expect(404)).body.error).toBe('unknown_code');
+    now += 2 * DAY_MS;
+    expect((await answer(token, tf.id, { type: 'truefalse', value: false }).expect(410)).body.error).toBe('catchup_closed');
+    const results = (await agent.get(`/api/sessions/${sessionId}/catchups/${id}/results`).expect(200)).body;
+    expect(results.closedAt).toBe(closed.closedAt);
+    expect(results.students.find((s: { displayName: string }) => s.displayName === 'Ben Q.').items[0]).toMatchObject({ attempts: 1, correctAttempts: 1, box: 2 });
+  });
+
+  it('answers 404 to a teacher without the class on the list and on close, and closes nothing', async () => {
+    const { agent, stranger, sessionId } = await endedClassSession();
+    const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    const other = await signedIn(http, stranger);
+    expect((await other.get(`/api/sessions/${sessionId}/catchups`).expect(404)).body).toMatchObject({ ok: false, error: 'not_found' });
+    await other.post(`/api/sessions/${sessionId}/catchups/${id}/close`).expect(404);
+    await agent.post(`/api/sessions/${sessionId}/catchups/${randomUUID()}/close`).expect(404);
+    expect((await agent.post(`/api/sessions/${sessionId}/catchups/not-a-uuid/close`).expect(400)).body.ok).toBe(false);
+    await request(http).get(`/api/play/catchups/${code}`).expect(200);
+  });
+
+  it('puts catch-up results into the student\u2019s history and the class page', async () => {
+    const { agent, sessionId, tf, ana, ben } = await endedClassSession();
+    const { code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    const benToken = (await started(code, ben.id)).token;
+    await answer(benToken, tf.id, { type: 'truefalse', value: true }).expect(200); // wrong: stays in box 1
+    now += DAY_MS;
+    await answer(benToken, tf.id, { type: 'truefalse', value: false }).expect(200); // right: box 2
+
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    const history = (await agent.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body;
+    expect(history).toMatchObject({ rosterEntryId: ben.id, displayName: 'Ben Q.', className: 'Chemistry' });
+    // Ben answered the true/false item wrong and the single item right in the session: 1 of 2.
+    expect(history.sessions).toHaveLength(1);
+    expect(history.sessions[0]).toMatchObject({ sessionId, score: 1, itemCount: 2, answered: 2, percent: { value: 50 } });
+    expect(history.sessions[0].missed.map((m: { itemId: string }) => m.itemId)).toEqual([tf.id]);
+    expect(history.meanPercent.value).toBeCloseTo(50, 12);
+    expect(history.catchups).toHaveLength(1);
+    expect(history.catchups[0]).toMatchObject({ sessionId, cardCount: 1, clearedCount: 1, attempts: 2, correctAttempts: 1 });
+    expect(history.catchups[0].items).toEqual([
+      expect.objectContaining({ itemId: tf.id, prompt: tf.prompt, box: 2, attempts: 2, correctAttempts: 1, lastCorrect: true }),
+    ]);
+
+    const trends = (await agent.get(`/api/classes/${cls}/trends`).expect(200)).body;
+    expect(trends.catchups).toHaveLength(1);
+    expect(trends.catchups[0]).toMatchObject({ code, attempts: 2, correctAttempts: 1, accuracy: { value: 0.5 }, boxCounts: [1, 1, 0, 0, 0] });
+    const students = new Map(trends.students.map((s: { displayName: string }) => [s.displayName, s]));
+    expect([...students.keys()]).toEqual(['Ana P.', 'Ben Q.', 'Cai R.']);
+    expect(students.get('Ana P.')).toMatchObject({ rosterEntryId: ana.id, sessionsPlayed: 1, openCards: 1, clearedCards: 0 });
+    expect(students.get('Ben Q.')).toMatchObject({ sessionsPlayed: 1, openCards: 0, clearedCards: 1, meanPercent: { value: 50 } });
+    expect(students.get('Cai R.')).toMatchObject({ sessionsPlayed: 1, openCards: 0, clearedCards: 0, meanPercent: { value: 100 } });
+  });
+
+  it('answers 404 for another teacher\u2019s class history and an entry of another class', async () => {
+    const { agent, stranger, sessionId, ben } = await endedClassSession();
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    const other = await signedIn(http, stranger);
+    expect((await other.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(404)).body.ok).toBe(false);
+    const otherClass = (await agent.post('/api/classes').send({ name: 'Physics', period: '4' }).expect(201)).body;
+    expect((await agent.get(`/api/classes/${otherClass.id}/roster/${ben.id}/history`).expect(404)).body.error).toBe('not_found');
+    const empty = (await agent.get(`/api/classes/${otherClass.id}/trends`).expect(200)).body;
+    expect(empty).toMatchObject({ sessions: [], tags: [], catchups: [], students: [] });
+  });
+
+  it('deletes a student\u2019s catch-up cards with their session data, and the history then shows nothing of them', async () => {
+    const { agent, sessionId, tf, ben } = await endedClassSession();
+    const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    await answer((await started(code, ben.id)).token, tf.id, { type: 'truefalse', value: false }).expect(200);
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    await agent.delete(`/api/classes/${cls}/roster/${ben.id}/data`).expect(200);
+
+    const results = (await agent.get(`/api/sessions/${sessionId}/catchups/${id}/results`).expect(200)).body;
+    expect(results.students.map((s: { displayName: string }) => s.displayName)).toEqual(['Ana P.']);
+    expect((await ctx.db.query('SELECT COUNT(*)::int AS n FROM catchup_answers'))[0].n).toBe(0);
+    const history = (await agent.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body;
+    expect(history).toMatchObject({ sessions: [], catchups: [], meanPercent: { value: null } });
+  });
 });

@@ -1,4 +1,6 @@
+import type { FigureDto } from './debrief';
 import type { ItemKey, ItemResponse, PlayerItemView } from './items';
+import type { Format } from './protocol';
 
 /** A Leitner box of the catch-up schedule: 1 (daily) … 5 (every 16 days). */
 export type CatchupBox = 1 | 2 | 3 | 4 | 5;
@@ -19,6 +21,7 @@ export interface CatchupCardResultDto {
   /** ISO time of the next review. */
   dueAt: string;
   attempts: number;
+  correctAttempts: number;
   /** Null before the first attempt. */
   lastCorrect: boolean | null;
   lastAnsweredAt: string | null;
@@ -90,4 +93,86 @@ export interface CatchupAnswerResponse {
   dueAt: string;
   /** ISO time of the earliest review over all the student's cards. */
   nextDueAt: string;
+}
+
+/** Cards in each Leitner box, box 1 first (five numbers). */
+export type CatchupBoxCounts = [number, number, number, number, number];
+
+/**
+ * One catch-up's headline, as `GET /api/sessions/:id/catchups` lists it and the class page shows it.
+ * "Cleared" cards are those whose last answer was right (box 2 or higher).
+ */
+export interface CatchupSummaryDto {
+  id: string;
+  sessionId: string;
+  bankTitle: string;
+  code: string;
+  createdAt: string;
+  closedAt: string | null;
+  /** Students with at least one card. */
+  studentCount: number;
+  /** Students who answered at least once. */
+  startedCount: number;
+  cardCount: number;
+  clearedCount: number;
+  boxCounts: CatchupBoxCounts;
+  attempts: number;
+  correctAttempts: number;
+  /** correctAttempts / attempts; null before the first answer. */
+  accuracy: FigureDto;
+}
+
+/** One catch-up as one student's history shows it: their cards only. */
+export interface StudentCatchupDto {
+  catchupId: string;
+  sessionId: string;
+  bankTitle: string;
+  createdAt: string;
+  closedAt: string | null;
+  cardCount: number;
+  clearedCount: number;
+  attempts: number;
+  correctAttempts: number;
+  items: CatchupCardResultDto[];
+}
+
+/** One ended session as one student's history shows it. */
+export interface StudentSessionDto {
+  sessionId: string;
+  bankTitle: string;
+  playedAt: string;
+  endedAt: string | null;
+  format: Format;
+  /** The student's figures in the debrief (their team's in `numbered`); percent 0..100. */
+  score: number | null;
+  percent: FigureDto;
+  itemCount: number;
+  answered: number;
+  /** Items without full credit, in the order played. */
+  missed: { itemId: string; prompt: string; credit: number; answerText: string; keyText: string }[];
+}
+
+/** `GET /api/classes/:classId/roster/:entryId/history`: every session and catch-up of one student in this class, oldest first. */
+export interface StudentHistoryDto {
+  classId: string;
+  className: string;
+  rosterEntryId: string;
+  displayName: string;
+  tableGroup: string | null;
+  sessions: StudentSessionDto[];
+  catchups: StudentCatchupDto[];
+  /** Mean of the session percents (0..100, as the debrief's student percent) that could be computed. */
+  meanPercent: FigureDto;
+}
+
+/** One student's line on the class page. */
+export interface ClassStudentTrendDto {
+  rosterEntryId: string;
+  displayName: string;
+  sessionsPlayed: number;
+  /** 0..100, the mean of the session percents that could be computed. */
+  meanPercent: FigureDto;
+  /** Catch-up cards still in box 1 (never answered right since they were made or last missed). */
+  openCards: number;
+  clearedCards: number;
 }

@@ -1,4 +1,5 @@
 import type { ItemKey, ItemResponse, ItemType } from './items';
+import type { CatchupSummaryDto, ClassStudentTrendDto } from './catchup';
 import type { Format } from './protocol';
 
 /**
@@ -168,6 +169,10 @@ export interface ClassTrendDto {
   className: string;
   sessions: { sessionId: string; bankTitle: string; endedAt: string }[];
   tags: { tag: string; points: TagTrendPointDto[] }[];
+  /** The class's catch-ups, oldest first, with how far the students have got. */
+  catchups: CatchupSummaryDto[];
+  /** Every student on the class list, by name: sessions played, mean percent, catch-up cards. */
+  students: ClassStudentTrendDto[];
 }
 
 /** `POST /api/sessions/:id/debrief/email` success. */

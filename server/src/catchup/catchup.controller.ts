@@ -1,5 +1,5 @@
-import { Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
-import type { CatchupResultsDto, CreateCatchupResponse } from '@covalent/shared-types';
+import { Controller, Get, HttpCode, HttpStatus, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import type { CatchupResultsDto, CatchupSummaryDto, CreateCatchupResponse } from '@covalent/shared-types';
 import { CurrentUser } from '../common/decorators';
 import { UserEntity } from '../users/entities/user.entity';
 import { CatchupService } from './catchup.service';
@@ -14,6 +14,18 @@ export class CatchupController {
   @Post()
   create(@CurrentUser() user: UserEntity, @Param('id', uuid()) id: string): Promise<CreateCatchupResponse> {
     return this.catchups.create(user, id);
+  }
+
+  @Get()
+  list(@CurrentUser() user: UserEntity, @Param('id', uuid()) id: string): Promise<CatchupSummaryDto[]> {
+    return this.catchups.list(user, id);
+  }
+
+  /** Stops the code from working; the results stay. */
+  @Post(':catchupId/close')
+  @HttpCode(HttpStatus.OK)
+  close(@CurrentUser() user: UserEntity, @Param('id', uuid()) id: string, @Param('catchupId', uuid()) catchupId: string): Promise<CatchupSummaryDto> {
+    return this.catchups.close(user, id, catchupId);
   }
 
   @Get(':catchupId/results')

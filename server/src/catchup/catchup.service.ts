@@ -4,11 +4,15 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type {
   CatchupAnswerResponse,
   CatchupBox,
+  CatchupCardResultDto,
   CatchupInfoResponse,
   CatchupResultsDto,
   CatchupStartResponse,
   CatchupStudentResultDto,
+  CatchupSummaryDto,
   CreateCatchupResponse,
+  FigureDto,
+  StudentCatchupDto,
 } from '@covalent/shared-types';
 import { DataSource, EntityManager, In, IsNull } from 'typeorm';
 import { RosterEntryEntity } from '../classes/entities/roster-entry.entity';
@@ -33,6 +37,65 @@ import { CatchupAnswerDto } from './dto/catchup-answer.dto';
 const notFound = (message = 'No such catch-up.') => new ApiException(HttpStatus.NOT_FOUND, 'not_found', message);
 
 const leitner = (c: CatchupCardEntity): LeitnerCard => ({ box: c.box, dueAt: c.dueAt.getTime(), reviewedAt: c.lastAnsweredAt?.getTime() ?? null });
+
+/** One card with its attempts and last result (alias c = catchup_cards). */
+const CARD_COLUMNS = `c.roster_entry_id, c.item_id, c.box, c.due_at, c.last_answered_at,
+  (SELECT COUNT(*)::int FROM catchup_answers a WHERE a.card_id = c.id) AS attempts,
+  (SELECT COUNT(*)::int FROM catchup_answers a WHERE a.card_id = c.id AND a.correct) AS correct_attempts,
+  (SELECT a.correct FROM catchup_answers a WHERE a.card_id = c.id ORDER BY a.answered_at DESC, a.created_at DESC LIMIT 1) AS last_correct`;
+
+interface CardRow {
+  roster_entry_id: string;
+  item_id: string;
+  box: CatchupBox;
+  due_at: Date;
+  last_answered_at: Date | null;
+  attempts: number;
+  correct_attempts: number;
+  last_correct: boolean | null;
+}
+
+/** Counts over a catch-up's cards (alias c) and their answers (alias a, from CARD_ATTEMPTS). */
+const CARD_COUNTS = `COUNT(DISTINCT c.roster_entry_id)::int AS student_count,
+  COUNT(DISTINCT c.roster_entry_id) FILTER (WHERE c.last_answered_at IS NOT NULL)::int AS started_count,
+  COUNT(c.id)::int AS card_count,
+  COUNT(c.id) FILTER (WHERE c.box >= 2)::int AS cleared_count,
+  COUNT(c.id) FILTER (WHERE c.box = 1)::int AS box1, COUNT(c.id) FILTER (WHERE c.box = 2)::int AS box2,
+  COUNT(c.id) FILTER (WHERE c.box = 3)::int AS box3, COUNT(c.id) FILTER (WHERE c.box = 4)::int AS box4,
+  COUNT(c.id) FILTER (WHERE c.box = 5)::int AS box5,
+  COALESCE(SUM(a.attempts), 0)::int AS attempts, COALESCE(SUM(a.correct), 0)::int AS correct_attempts`;
+
+const CARD_ATTEMPTS = `LEFT JOIN LATERAL (SELECT COUNT(*) AS attempts, COUNT(*) FILTER (WHERE correct) AS correct
+  FROM catchup_answers WHERE card_id = c.id) a ON true`;
+
+interface CatchupCounts {
+  student_count: number;
+  started_count: number;
+  card_count: number;
+  cleared_count: number;
+  box1: number;
+  box2: number;
+  box3: number;
+  box4: number;
+  box5: number;
+  attempts: number;
+  correct_attempts: number;
+}
+
+function cardResult(r: CardRow, items: readonly SessionItem[]): CatchupCardResultDto {
+  return {
+    itemId: r.item_id,
+    prompt: items.find((i) => i.id === r.item_id)?.prompt ?? '',
+    box: r.box,
+    dueAt: r.due_at.toISOString(),
+    attempts: r.attempts,
+    correctAttempts: r.correct_attempts,
+    lastCorrect: r.last_correct,
+    lastAnsweredAt: r.last_answered_at?.toISOString() ?? null,
+  };
+}
+
+const share = (part: number, whole: number, reason: string): FigureDto => (whole > 0 ? { value: part / whole, reason: null } : { value: null, reason });
 
 const iso = (ms: number | null): string | null => (ms === null ? null : new Date(ms).toISOString());
 
@@ -93,19 +156,8 @@ export class CatchupService {
     const session = await this.debriefs.readable(user, sessionId);
     const catchup = await this.db.getRepository(CatchupEntity).findOne({ where: { id: catchupId, sessionId } });
     if (!catchup) throw notFound();
-    const rows: {
-      roster_entry_id: string;
-      display_name: string;
-      item_id: string;
-      box: CatchupBox;
-      due_at: Date;
-      last_answered_at: Date | null;
-      attempts: number;
-      last_correct: boolean | null;
-    }[] = await this.db.query(
-      `SELECT c.roster_entry_id, re.display_name, c.item_id, c.box, c.due_at, c.last_answered_at,
-              (SELECT COUNT(*)::int FROM catchup_answers a WHERE a.card_id = c.id) AS attempts,
-              (SELECT a.correct FROM catchup_answers a WHERE a.card_id = c.id ORDER BY a.answered_at DESC, a.created_at DESC LIMIT 1) AS last_correct
+    const rows: (CardRow & { display_name: string })[] = await this.db.query(
+      `SELECT re.display_name, ${CARD_COLUMNS}
        FROM catchup_cards c JOIN roster_entries re ON re.id = c.roster_entry_id
        WHERE c.catchup_id = $1
        ORDER BY re.display_name, c.roster_entry_id`,
@@ -116,15 +168,7 @@ export class CatchupService {
     for (const r of rows) {
       let s = students.get(r.roster_entry_id);
       if (!s) students.set(r.roster_entry_id, (s = { rosterEntryId: r.roster_entry_id, displayName: r.display_name, items: [] }));
-      s.items.push({
-        itemId: r.item_id,
-        prompt: session.items[position.get(r.item_id) ?? -1]?.prompt ?? '',
-        box: r.box,
-        dueAt: r.due_at.toISOString(),
-        attempts: r.attempts,
-        lastCorrect: r.last_correct,
-        lastAnsweredAt: r.last_answered_at?.toISOString() ?? null,
-      });
+      s.items.push(cardResult(r, session.items));
     }
     for (const s of students.values()) s.items.sort((a, b) => (position.get(a.itemId) ?? 0) - (position.get(b.itemId) ?? 0));
     return {
@@ -135,6 +179,118 @@ export class CatchupService {
       closedAt: catchup.closedAt?.toISOString() ?? null,
       students: [...students.values()],
     };
+  }
+
+  /** `GET /api/sessions/:id/catchups`: the session's catch-ups, oldest first. */
+  async list(user: UserEntity, sessionId: string): Promise<CatchupSummaryDto[]> {
+    await this.debriefs.readable(user, sessionId);
+    return this.summaries('k.session_id = $1', [sessionId]);
+  }
+
+  /** Closes a catch-up: its code stops working; its results stay. Closing twice changes nothing. */
+  async close(user: UserEntity, sessionId: string, catchupId: string): Promise<CatchupSummaryDto> {
+    await this.debriefs.readable(user, sessionId);
+    const repo = this.db.getRepository(CatchupEntity);
+    const catchup = await repo.findOne({ where: { id: catchupId, sessionId } });
+    if (!catchup) throw notFound();
+    if (catchup.closedAt === null) await repo.update({ id: catchup.id, closedAt: IsNull() }, { closedAt: new Date(this.clock.now()) });
+    const [summary] = await this.summaries('k.id = $1', [catchup.id]);
+    return summary!;
+  }
+
+  /** A class's catch-ups for the class page. The caller has checked access to the class. */
+  forClass(classId: string): Promise<CatchupSummaryDto[]> {
+    return this.summaries('k.class_id = $1', [classId]);
+  }
+
+  private async summaries(where: string, params: unknown[]): Promise<CatchupSummaryDto[]> {
+    const rows: (CatchupCounts & { id: string; session_id: string; bank_title: string; code: string; created_at: Date; closed_at: Date | null })[] =
+      await this.db.query(
+        `SELECT k.id, k.session_id, s.bank_title, k.code, k.created_at, k.closed_at, ${CARD_COUNTS}
+         FROM catchups k JOIN sessions s ON s.id = k.session_id
+         LEFT JOIN catchup_cards c ON c.catchup_id = k.id
+         ${CARD_ATTEMPTS}
+         WHERE ${where}
+         GROUP BY k.id, s.bank_title
+         ORDER BY k.created_at, k.id`,
+        params,
+      );
+    return rows.map((r) => ({
+      id: r.id,
+      sessionId: r.session_id,
+      bankTitle: r.bank_title,
+      code: r.code,
+      createdAt: r.created_at.toISOString(),
+      closedAt: r.closed_at?.toISOString() ?? null,
+      studentCount: r.student_count,
+      startedCount: r.started_count,
+      cardCount: r.card_count,
+      clearedCount: r.cleared_count,
+      boxCounts: [r.box1, r.box2, r.box3, r.box4, r.box5],
+      attempts: r.attempts,
+      correctAttempts: r.correct_attempts,
+      accuracy: share(r.correct_attempts, r.attempts, 'No catch-up answers yet.'),
+    }));
+  }
+
+  /** Per roster entry of the class: catch-up cards still in box 1 and cleared (box 2 or higher). */
+  async cardCountsByStudent(classId: string): Promise<Map<string, { open: number; cleared: number }>> {
+    const rows: { roster_entry_id: string; open: number; cleared: number }[] = await this.db.query(
+      `SELECT c.roster_entry_id, COUNT(*) FILTER (WHERE c.box = 1)::int AS open, COUNT(*) FILTER (WHERE c.box >= 2)::int AS cleared
+       FROM catchup_cards c JOIN catchups k ON k.id = c.catchup_id
+       WHERE k.class_id = $1 GROUP BY c.roster_entry_id`,
+      [classId],
+    );
+    return new Map(rows.map((r) => [r.roster_entry_id, { open: r.open, cleared: r.cleared }]));
+  }
+
+  /** One student's cards in the class's catch-ups, oldest catch-up first. The caller has checked access to the class. */
+  async forStudent(classId: string, rosterEntryId: string): Promise<StudentCatchupDto[]> {
+    const rows: (CardRow & { catchup_id: string; session_id: string; created_at: Date; closed_at: Date | null })[] = await this.db.query(
+      `SELECT k.id AS catchup_id, k.session_id, k.created_at, k.closed_at, ${CARD_COLUMNS}
+       FROM catchup_cards c JOIN catchups k ON k.id = c.catchup_id
+       WHERE k.class_id = $1 AND c.roster_entry_id = $2
+       ORDER BY k.created_at, k.id`,
+      [classId, rosterEntryId],
+    );
+    const sessionIds = [...new Set(rows.map((r) => r.session_id))];
+    const sessions = new Map(
+      (sessionIds.length ? await this.db.getRepository(SessionEntity).find({ where: { id: In(sessionIds) }, select: { id: true, bankTitle: true, items: true } }) : []).map(
+        (s) => [s.id, s],
+      ),
+    );
+    const out = new Map<string, StudentCatchupDto>();
+    for (const r of rows) {
+      const session = sessions.get(r.session_id);
+      let k = out.get(r.catchup_id);
+      if (!k) {
+        out.set(
+          r.catchup_id,
+          (k = {
+            catchupId: r.catchup_id,
+            sessionId: r.session_id,
+            bankTitle: session?.bankTitle ?? '',
+            createdAt: r.created_at.toISOString(),
+            closedAt: r.closed_at?.toISOString() ?? null,
+            cardCount: 0,
+            clearedCount: 0,
+            attempts: 0,
+            correctAttempts: 0,
+            items: [],
+          }),
+        );
+      }
+      k.cardCount += 1;
+      if (r.box >= 2) k.clearedCount += 1;
+      k.attempts += r.attempts;
+      k.correctAttempts += r.correct_attempts;
+      k.items.push(cardResult(r, session?.items ?? []));
+    }
+    for (const k of out.values()) {
+      const position = new Map((sessions.get(k.sessionId)?.items ?? []).map((item, i) => [item.id, i]));
+      k.items.sort((a, b) => (position.get(a.itemId) ?? 0) - (position.get(b.itemId) ?? 0));
+    }
+    return [...out.values()];
   }
 
   // ---- Student (public) ----

@@ -1,6 +1,6 @@
 import { Controller, Get, HttpCode, HttpStatus, Param, ParseUUIDPipe, Post, Res, StreamableFile } from '@nestjs/common';
 import type { Response } from 'express';
-import type { ClassTrendDto, DebriefDto, DebriefEmailResponse, DebriefItemDto, DebriefSummaryDto } from '@covalent/shared-types';
+import type { DebriefDto, DebriefEmailResponse, DebriefItemDto, DebriefSummaryDto } from '@covalent/shared-types';
 import { CurrentUser } from '../common/decorators';
 import { UserEntity } from '../users/entities/user.entity';
 import { CsvExport, DebriefService } from './debrief.service';
@@ -46,10 +46,5 @@ export class DebriefController {
   @Get('sessions/:id/exports/item-analysis.csv')
   async itemAnalysis(@CurrentUser() user: UserEntity, @Param('id', uuid()) id: string, @Res({ passthrough: true }) res: Response): Promise<StreamableFile> {
     return csvFile(res, await this.debriefs.itemAnalysis(user, id));
-  }
-
-  @Get('classes/:id/trends')
-  trends(@CurrentUser() user: UserEntity, @Param('id', uuid()) id: string): Promise<ClassTrendDto> {
-    return this.debriefs.trends(user, id);
   }
 }

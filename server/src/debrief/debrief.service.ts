@@ -1,7 +1,6 @@
 import { HttpStatus, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type {
-  ClassTrendDto,
   DebriefDto,
   DebriefEmailResponse,
   DebriefItemDto,
@@ -9,7 +8,6 @@ import type {
   ItemResponse,
 } from '@covalent/shared-types';
 import { DataSource, In } from 'typeorm';
-import { ClassesService } from '../classes/classes.service';
 import { ClassCoTeacherEntity } from '../classes/entities/class-co-teacher.entity';
 import { ApiException } from '../common/api-error';
 import { MailService } from '../mail/mail.service';
@@ -18,7 +16,6 @@ import { SessionsService } from '../sessions/sessions.service';
 import { UserEntity } from '../users/entities/user.entity';
 import { buildDebrief } from './debrief-builder';
 import type { DebriefSource, SourceTeamRound } from './debrief-source';
-import { accuracyByTag } from './domain';
 import { debriefEmail } from './exports/debrief-email';
 import { exportFileName, gradebookCsv, itemAnalysisCsv } from './exports/debrief-csv';
 import { isDeletedNicknameKey } from './player-data';
@@ -38,7 +35,6 @@ export class DebriefService {
   constructor(
     @InjectDataSource() private readonly db: DataSource,
     private readonly sessions: SessionsService,
-    private readonly classes: ClassesService,
     private readonly mail: MailService,
   ) {}
 
@@ -123,26 +119,6 @@ export class DebriefService {
       out.push(summary);
     }
     return out;
-  }
-
-  /** Accuracy by tag across the class's ended sessions (class owner, co-teachers, school admins). */
-  async trends(user: UserEntity, classId: string): Promise<ClassTrendDto> {
-    const { cls } = await this.classes.access(user, classId, 'read');
-    const rows = await this.db.getRepository(SessionEntity).find({
-      where: { classId, status: 'ended' },
-      relations: { class: true },
-      order: { endedAt: 'ASC', id: 'ASC' },
-    });
-    const sessions: { sessionId: string; bankTitle: string; endedAt: string }[] = [];
-    const tagged = [];
-    for (const row of rows) {
-      const source = await this.load(row);
-      const { dto } = buildDebrief(source);
-      const endedAt = (row.endedAt ?? row.updatedAt).toISOString();
-      sessions.push({ sessionId: row.id, bankTitle: row.bankTitle, endedAt });
-      tagged.push({ sessionId: row.id, endedAt, items: dto.items.map((i) => ({ tags: i.tags, p: i.p.value })) });
-    }
-    return { classId: cls.id, className: cls.name, sessions, tags: accuracyByTag(tagged) };
   }
 
   /** Everything the debrief needs from the database. */

@@ -28,6 +28,12 @@ export class PlayerDataService {
   /** Inside the caller's transaction; returns how many responses were deleted. */
   async erase(m: EntityManager, sessionId: string, playerIds: string[]): Promise<number> {
     if (playerIds.length === 0) return 0;
+    // Their catch-up cards (and answers, by cascade) were made from this session's responses: they go too.
+    await m.query(
+      `DELETE FROM catchup_cards WHERE catchup_id IN (SELECT id FROM catchups WHERE session_id = $1)
+         AND roster_entry_id IN (SELECT roster_entry_id FROM session_players WHERE session_id = $1 AND id = ANY($2) AND roster_entry_id IS NOT NULL)`,
+      [sessionId, playerIds],
+    );
     const deleted: unknown[] = await m.query('DELETE FROM responses WHERE session_id = $1 AND player_id = ANY($2) RETURNING id', [sessionId, playerIds]);
     await m.query(
       `UPDATE session_players SET nickname = $3, nickname_key = $4 || id::text, roster_entry_id = NULL, table_group = NULL,

@@ -1,0 +1,3 @@
+export { HistoryModule } from './history.module';
+export { HistoryService } from './history.service';
+export { meanOfFigures } from './domain';
