@@ -1,9 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import * as path from 'node:path';
-import seedrandom from 'seedrandom';
-import type { Socket } from 'socket.io-client';
-import type { DataSource } from 'typeorm';
 import {
   checkHistory,
   checkRejoin,
@@ -20,9 +17,7 @@ import {
   type Player,
   type Standing,
 } from '../helpers/history';
-import { openDatabase, ServerProcess, setUpSession, type LiveFixture } from '../helpers/server-process';
-import { resetDatabase } from '../helpers/test-app';
-import { FaultProxy } from './fault-proxy';
+import { FaultRig, rightAnswer, wrongAnswer } from './fault-table';
 
 // The project's own cluster, as scripts/lib.sh start_postgres lays it out (relative to the repo root).
 const DATA = path.resolve(__dirname, '../../../.data');
@@ -82,66 +77,14 @@ const itWithOwnCluster = PG_PORT ? it : it.skip;
  * restart or a database restart. The database test runs last: it stops the shared cluster.
  */
 describe('live sessions across crashes (integration: built server, fault proxy, PostgreSQL)', () => {
-  let server: ServerProcess;
-  let db: DataSource;
-  let open: { proxies: FaultProxy[]; sockets: Socket[] } = { proxies: [], sockets: [] };
+  const rig = new FaultRig();
+  rig.hooks();
+  const right = rightAnswer;
+  const wrong = wrongAnswer;
 
-  beforeAll(async () => {
-    // Clean tables first, as every suite does: nothing stale to restore at boot, no clashing test e-mails.
-    db = await openDatabase();
-    await resetDatabase(db);
-    server = await ServerProcess.start();
-  }, 30_000);
-  afterAll(async () => {
-    await server?.stop();
-    await db?.destroy().catch(() => undefined);
-  });
-  afterEach(async () => {
-    for (const s of open.sockets) s.close();
-    for (const p of open.proxies) await p.close();
-    open = { proxies: [], sockets: [] };
-  });
-
-  interface Table {
-    fx: LiveFixture;
-    players: Player[];
-    proxies: FaultProxy[];
-    host: Socket;
-    history: History;
-  }
-
-  async function table(n: number, roundSeconds: number, seed: string): Promise<Table> {
-    const nicknames = Array.from({ length: n }, (_, i) => `Kiln${seed.slice(0, 4)}${i}`);
-    const fx = await setUpSession(server, db, nicknames, { format: 'solo', roundSeconds, teamCount: 2, speedWeight: 0.5 });
-    const players: Player[] = [];
-    const proxies: FaultProxy[] = [];
-    for (const [i, p] of fx.players.entries()) {
-      // Players reach the server through a proxy of their own: it keeps its port across the restart.
-      const proxy = new FaultProxy(server.port, seedrandom(`${seed}:${i}`));
-      await proxy.listen();
-      proxies.push(proxy);
-      open.proxies.push(proxy);
-      const player = await connectPlayerTo(`http://127.0.0.1:${proxy.port}`, p);
-      open.sockets.push(player.socket);
-      players.push(player);
-    }
-    const host = await connectHostTo(server.url, fx.sessionId, fx.cookie);
-    open.sockets.push(host);
-    expect(await hostCommand(host, { type: 'start' })).toMatchObject({ ok: true });
-    expect(await hostCommand(host, { type: 'open_round' })).toMatchObject({ ok: true });
-    await until(() => players.every((p) => p.deadlines.has(0)), 5000, 'round 0 to open');
-    return { fx, players, proxies, host, history: new History() };
-  }
-
-  const right = (t: Table, round: number) => ({ type: 'single', optionId: t.fx.items[round].key.correctOptionId as string });
-  const wrong = (t: Table, round: number) => ({ type: 'single', optionId: t.fx.items[round].options.find((o) => o.id !== t.fx.items[round].key.correctOptionId)!.id });
-
-  async function scored(sessionId: string, round: number): Promise<{ player_id: string; points: number }[]> {
-    return db.query(`SELECT player_id, points FROM responses WHERE session_id = $1 AND round_index = $2 AND final AND points IS NOT NULL`, [sessionId, round]);
-  }
 
   it('SIGKILL mid-round and a restart: every acknowledged answer is there after the reveal; players rejoin on their team with their points', async () => {
-    const t = await table(6, 20, 'sigkill');
+    const t = await rig.table(6, 20, 'sigkill', 'Kiln');
     const { history, players } = t;
     await Promise.all(players.map((p, i) => submitAnswer(history, p, `k-${i}-r0`, 0, i % 2 ? right(t, 0) : wrong(t, 0))));
     await until(() => players.every((p) => p.closed.has(0)), 3000, 'round 0 to close');
@@ -162,12 +105,12 @@ describe('live sessions across crashes (integration: built server, fault proxy, 
     t.proxies[4].setProfile({ delayMs: 150 });
     const send = (i: number) => submitAnswer(history, players[i], `k-${i}-r1`, 1, wrong(t, 1), { ackTimeoutMs: 2000, giveUpAfterMs: 20_000 });
     const inFlight = [send(3), send(4)];
-    await until(async () => (await db.query(`SELECT 1 FROM responses WHERE client_message_id IN ('k-3-r1', 'k-4-r1')`)).length === 2, 2000, 'the delayed answers to be stored');
+    await until(async () => (await rig.db.query(`SELECT 1 FROM responses WHERE client_message_id IN ('k-3-r1', 'k-4-r1')`)).length === 2, 2000, 'the delayed answers to be stored');
     inFlight.push(send(5));
     await new Promise((r) => setImmediate(r));
     const killedAt = Date.now();
-    await server.kill('SIGKILL');
-    await server.restart();
+    await rig.server.kill('SIGKILL');
+    await rig.server.restart();
     const restartMs = Date.now() - killedAt;
 
     const after = new Map<string, Standing>();
@@ -184,20 +127,20 @@ describe('live sessions across crashes (integration: built server, fault proxy, 
     const resent = await submitAnswer(history, players[0], 'k-0-r1', 1, right(t, 1));
     expect(resent).toMatchObject({ outcome: 'ok', duplicate: true });
 
-    const host = await connectHostTo(server.url, t.fx.sessionId, t.fx.cookie);
-    open.sockets.push(host);
+    const host = await connectHostTo(rig.server.url, t.fx.sessionId, t.fx.cookie);
+    rig.track(host);
     await until(() => players.every((p) => p.closed.has(1)), 5000, 'round 1 to close (everyone answered)');
     expect(await hostCommand(host, { type: 'reveal' })).toMatchObject({ ok: true });
-    expect(await checkHistory(db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
-    expect(await scored(t.fx.sessionId, 1)).toHaveLength(6);
-    expect(server.crashes).toEqual([]);
+    expect(await checkHistory(rig.db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
+    expect(await rig.scored(t.fx.sessionId, 1)).toHaveLength(6);
+    expect(rig.server.crashes).toEqual([]);
     expect(restartMs).toBeLessThan(15_000);
     await hostCommand(host, { type: 'end' });
   }, 60_000);
 
   // Last in this file: it stops the cluster every suite shares. Kept short; restarted in `finally`.
   itWithOwnCluster('PostgreSQL stopped and started mid-round: answers are refused (never acknowledged and lost), then the session goes on', async () => {
-    const t = await table(4, 30, 'pgstop');
+    const t = await rig.table(4, 30, 'pgstop', 'Kiln');
     const { history, players } = t;
     const first = await submitAnswer(history, players[0], 'pg-0-r0', 0, right(t, 0));
     expect(first).toMatchObject({ outcome: 'ok', duplicate: false });
@@ -207,17 +150,17 @@ describe('live sessions across crashes (integration: built server, fault proxy, 
       stopPostgres();
       const submit = await submitAnswer(history, players[1], 'pg-1-r0', 0, right(t, 0), { ackTimeoutMs: 4000, giveUpAfterMs: 0 });
       const host = await hostCommand(t.host, { type: 'add_time' });
-      down = { submit, host, health: await server.health() };
+      down = { submit, host, health: await rig.server.health() };
     } finally {
       if (!postgresRunning()) startPostgres(PG_PORT!);
     }
-    expect(server.crashes).toEqual([]);
+    expect(rig.server.crashes).toEqual([]);
     // While down: a clear refusal (docs/protocol.md `storage_unavailable`), never an ok.
     expect(down.submit).toMatchObject({ outcome: 'refused', error: 'storage_unavailable' });
     expect(down.host).toMatchObject({ ok: false, error: 'storage_unavailable' });
     expect(down.health).toBe(503);
 
-    await server.waitHealthy(15_000);
+    await rig.server.waitHealthy(15_000);
     // Back up: the same id again (the pool may need a moment to replace its dead connections).
     const again = await submitAnswer(history, players[1], 'pg-1-r0', 0, right(t, 0), { retryOn: ['storage_unavailable'], giveUpAfterMs: 10_000 });
     expect(again).toMatchObject({ outcome: 'ok', duplicate: false });
@@ -225,9 +168,9 @@ describe('live sessions across crashes (integration: built server, fault proxy, 
     expect(rest.every((o) => o.outcome === 'ok')).toBe(true);
     await until(() => players.every((p) => p.closed.has(0)), 5000, 'round 0 to close');
     expect(await hostCommand(t.host, { type: 'reveal' })).toMatchObject({ ok: true });
-    expect(await checkHistory(db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
-    expect(await scored(t.fx.sessionId, 0)).toHaveLength(4);
-    expect(server.crashes).toEqual([]);
+    expect(await checkHistory(rig.db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
+    expect(await rig.scored(t.fx.sessionId, 0)).toHaveLength(4);
+    expect(rig.server.crashes).toEqual([]);
     await hostCommand(t.host, { type: 'end' });
   }, 60_000);
 });

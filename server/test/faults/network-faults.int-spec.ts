@@ -1,6 +1,4 @@
 import seedrandom from 'seedrandom';
-import type { Socket } from 'socket.io-client';
-import type { DataSource } from 'typeorm';
 import {
   checkHistory,
   checkRejoin,
@@ -17,9 +15,7 @@ import {
   type Player,
   type Standing,
 } from '../helpers/history';
-import { openDatabase, ServerProcess, setUpSession, type LiveFixture } from '../helpers/server-process';
-import { resetDatabase } from '../helpers/test-app';
-import { FaultProxy, type FaultProfile } from './fault-proxy';
+import { FaultRig, rightAnswer, wrongAnswer } from './fault-table';
 
 /**
  * Network faults between players and the real (built) server, through our TCP fault
@@ -28,69 +24,15 @@ import { FaultProxy, type FaultProfile } from './fault-proxy';
  * nothing received after its deadline is scored, late answers get a clear refusal.
  */
 describe('live sessions under network faults (integration: built server, fault proxy, PostgreSQL)', () => {
-  let server: ServerProcess;
-  let db: DataSource;
-  let open: { proxies: FaultProxy[]; sockets: Socket[] } = { proxies: [], sockets: [] };
-
-  beforeAll(async () => {
-    // Clean tables first, as every suite does: nothing stale to restore at boot, no clashing test e-mails.
-    db = await openDatabase();
-    await resetDatabase(db);
-    server = await ServerProcess.start();
-  }, 30_000);
-  afterAll(async () => {
-    await server?.stop();
-    await db?.destroy();
-  });
-  afterEach(async () => {
-    for (const s of open.sockets) s.close();
-    for (const p of open.proxies) await p.close();
-    open = { proxies: [], sockets: [] };
-    expect(server.crashes).toEqual([]);
-  });
-
-  interface Table {
-    fx: LiveFixture;
-    players: Player[];
-    proxies: FaultProxy[];
-    host: Socket;
-    history: History;
-  }
-
-  /** A solo session of `n` players, each behind their own proxy, started with round 0 open. */
-  async function table(n: number, roundSeconds: number, seed: string, profile?: Partial<FaultProfile>): Promise<Table> {
-    const nicknames = Array.from({ length: n }, (_, i) => `Lab${seed.slice(0, 4)}${i}`);
-    const fx = await setUpSession(server, db, nicknames, { format: 'solo', roundSeconds, teamCount: 2, speedWeight: 0.5 });
-    const proxies: FaultProxy[] = [];
-    const players: Player[] = [];
-    for (const [i, p] of fx.players.entries()) {
-      const proxy = new FaultProxy(server.port, seedrandom(`${seed}:${i}`));
-      if (profile) proxy.defaultProfile = { ...proxy.defaultProfile, ...profile };
-      await proxy.listen();
-      proxies.push(proxy);
-      open.proxies.push(proxy);
-      const player = await connectPlayerTo(`http://127.0.0.1:${proxy.port}`, p);
-      open.sockets.push(player.socket);
-      players.push(player);
-    }
-    const host = await connectHostTo(server.url, fx.sessionId, fx.cookie);
-    open.sockets.push(host);
-    expect(await hostCommand(host, { type: 'start' })).toMatchObject({ ok: true });
-    expect(await hostCommand(host, { type: 'open_round' })).toMatchObject({ ok: true });
-    await until(() => players.every((p) => p.deadlines.has(0)), 5000, 'round 0 to open for everyone');
-    return { fx, players, proxies, host, history: new History() };
-  }
-
-  const right = (t: Table, round: number) => ({ type: 'single', optionId: t.fx.items[round].key.correctOptionId as string });
-  const wrong = (t: Table, round: number) => ({ type: 'single', optionId: t.fx.items[round].options.find((o) => o.id !== t.fx.items[round].key.correctOptionId)!.id });
+  const rig = new FaultRig();
+  rig.hooks(() => expect(rig.server.crashes).toEqual([]));
+  const right = rightAnswer;
+  const wrong = wrongAnswer;
   const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-  async function scored(sessionId: string, round: number): Promise<{ player_id: string; points: number }[]> {
-    return db.query(`SELECT player_id, points FROM responses WHERE session_id = $1 AND round_index = $2 AND final AND points IS NOT NULL`, [sessionId, round]);
-  }
 
   it('40 ± 20 ms delay on every player: the round completes and every acknowledged answer is stored once', async () => {
-    const t = await table(6, 8, 'delay', { delayMs: 40, jitterMs: 20 });
+    const t = await rig.table(6, 8, 'delay', 'Lab', { delayMs: 40, jitterMs: 20 });
     const rng = seedrandom('delay:think');
     // Think times U(0, 1.5) s (a compressed BENCHMARK.md §8 arrival pattern).
     const ops = await Promise.all(
@@ -104,8 +46,8 @@ describe('live sessions under network faults (integration: built server, fault p
     for (const o of ops) expect(o.completedAt! - o.invokedAt).toBeGreaterThanOrEqual(40);
     await until(() => t.players.every((p) => p.closed.has(0)), 3000, 'round 0 to close (everyone answered)');
     expect(await hostCommand(t.host, { type: 'reveal' })).toMatchObject({ ok: true });
-    expect(await checkHistory(db, t.history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(t.players) })).toEqual([]);
-    expect(await scored(t.fx.sessionId, 0)).toHaveLength(6);
+    expect(await checkHistory(rig.db, t.history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(t.players) })).toEqual([]);
+    expect(await rig.scored(t.fx.sessionId, 0)).toHaveLength(6);
     await hostCommand(t.host, { type: 'end' });
   }, 30_000);
 
@@ -116,7 +58,7 @@ describe('live sessions under network faults (integration: built server, fault p
    * late. So a 10 s hole here tests late delivery, not a reconnect.
    */
   it('a 10 s blackhole for a fifth of the players: held answers count once if in time, are refused as too_late after the deadline', async () => {
-    const t = await table(10, 12, 'blackhole');
+    const t = await rig.table(10, 12, 'blackhole', 'Lab');
     const opened = Date.now();
     const [inTime, late, ...rest] = t.players;
     const history = t.history;
@@ -145,16 +87,16 @@ describe('live sessions under network faults (integration: built server, fault p
     await until(() => rest.every((p) => p.closed.has(0)), 3000, 'round 0 to close at its deadline');
     expect(await hostCommand(t.host, { type: 'reveal' })).toMatchObject({ ok: true });
 
-    expect(await checkHistory(db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(t.players) })).toEqual([]);
-    const rows: { player_id: string }[] = await db.query(`SELECT player_id FROM responses WHERE session_id = $1`, [t.fx.sessionId]);
+    expect(await checkHistory(rig.db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(t.players) })).toEqual([]);
+    const rows: { player_id: string }[] = await rig.db.query(`SELECT player_id FROM responses WHERE session_id = $1`, [t.fx.sessionId]);
     expect(rows.filter((r) => r.player_id === inTime.playerId)).toHaveLength(1);
     expect(rows.filter((r) => r.player_id === late.playerId)).toHaveLength(0);
-    expect(await scored(t.fx.sessionId, 0)).toHaveLength(9);
+    expect(await rig.scored(t.fx.sessionId, 0)).toHaveLength(9);
     await hostCommand(t.host, { type: 'end' });
   }, 40_000);
 
   it('connection resets mid-round: players reconnect with their tokens, resend with the same id, count once, keep team and points', async () => {
-    const t = await table(6, 12, 'reset');
+    const t = await rig.table(6, 12, 'reset', 'Lab');
     const { history, players } = t;
     // Round 0, no faults: everyone answers, the reveal gives points to come back to.
     await Promise.all(players.map((p, i) => submitAnswer(history, p, `rs-${i}-r0`, 0, i < 3 ? right(t, 0) : wrong(t, 0))));
@@ -197,8 +139,8 @@ describe('live sessions under network faults (integration: built server, fault p
     expect(restOps.every((o) => o.outcome === 'ok')).toBe(true);
     await until(() => players.every((p) => p.closed.has(1)), 3000, 'round 1 to close');
     expect(await hostCommand(t.host, { type: 'reveal' })).toMatchObject({ ok: true });
-    expect(await checkHistory(db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
-    expect(await scored(t.fx.sessionId, 1)).toHaveLength(6);
+    expect(await checkHistory(rig.db, history, { sessionId: t.fx.sessionId, deadlines: deadlinesOf(players) })).toEqual([]);
+    expect(await rig.scored(t.fx.sessionId, 1)).toHaveLength(6);
     await hostCommand(t.host, { type: 'end' });
   }, 40_000);
 });
