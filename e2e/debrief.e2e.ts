@@ -39,7 +39,7 @@ async function playSession(
   request: APIRequestContext,
   baseURL: string,
   cookie: string,
-): Promise<{ sessionId: string; title: string; students: string[] }> {
+): Promise<{ sessionId: string; classId: string; title: string; students: string[] }> {
   const banks = (await (await request.get('/api/banks')).json()) as { id: string; title: string }[];
   const bank = banks.find((b) => /safety equipment/i.test(b.title))!;
   const items = ((await (await request.get(`/api/banks/${bank.id}/items`)).json()) as BankItem[])
@@ -90,13 +90,13 @@ async function playSession(
   }
   await command('end');
   for (const s of [host, ...players]) s.close();
-  return { sessionId: session.id, title: bank.title, students: picked.map((e) => e.displayName) };
+  return { sessionId: session.id, classId: period2.id, title: bank.title, students: picked.map((e) => e.displayName) };
 }
 
 test('the teacher reads, sorts, exports and sends the debrief of a played session', async ({ page, baseURL }) => {
   await signIn(page);
   const cookie = (await page.context().cookies()).map((c) => `${c.name}=${c.value}`).join('; ');
-  const { sessionId, title, students } = await playSession(page.request, baseURL!, cookie);
+  const { sessionId, classId, title, students } = await playSession(page.request, baseURL!, cookie);
 
   await page.getByRole('navigation').getByRole('link', { name: 'Debriefs' }).click();
   await page.locator(`a[href$="/debriefs/${sessionId}"]`).first().click();
@@ -112,6 +112,7 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
 
   const studentTable = page.getByRole('table', { name: 'Students' });
   await expect(studentTable.getByRole('row')).toHaveCount(5); // header + 4 students
+  await expect(studentTable.getByRole('row').filter({ hasText: students[0] })).toContainText('66.7%'); // right on items 1 and 3 of 3
 
   // Both CSVs download with their headers.
   for (const [name, header] of [
@@ -139,6 +140,18 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
     })
     .toBe(true);
 
+  // The printable view in Chromium's own print rendering: the figures, without navigation or buttons.
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByRole('navigation')).toBeHidden();
+  await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
+  await expect(page.getByRole('button', { name: 'Create catch-up' })).toBeHidden();
+  await expect(items).toBeVisible();
+  await expect(studentTable).toBeVisible();
+  const pdf = await page.pdf({ format: 'A4' });
+  expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-'); // ISO 32000-1 §7.5.2: a PDF file starts with its header "%PDF-"
+  await page.emulateMedia({ media: 'screen' });
+  await expect(page.getByRole('button', { name: 'Print' })).toBeVisible();
+
   // The first student missed item 2 of 3 (right when (0 + r) is even): a catch-up of that one.
   await page.getByRole('button', { name: 'Create catch-up' }).click();
   const code = (await page.getByTestId('catchup-code').textContent())!.trim();
@@ -158,6 +171,42 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
   }
   expect(answered).toBe(1);
   await expect(student.getByText(/of 1 right/)).toBeVisible();
+
+  // Cards made: each student missed the items where (i + r) is odd — 1, 2, 1 and 2 of them.
+  await page.reload();
+  const catchups = page.getByRole('table', { name: 'Catch-ups of this session' });
+  const catchupRow = catchups.getByRole('row').filter({ hasText: code });
+  await expect(catchupRow).toContainText('open');
+  await expect(catchupRow).toContainText('1 of 4'); // students started
+  await expect(catchupRow).toContainText(/of 6/); // cards cleared of all cards
+  await page.getByRole('button', { name: `Results for catch-up ${code}` }).click();
+  const results = page.getByRole('table', { name: `Catch-up results ${code}` });
+  const lastResult = /^(right|wrong)$/;
+  await expect(results.getByRole('row').filter({ hasText: students[0] }).getByRole('cell', { name: lastResult })).toHaveCount(1);
+  await expect(results.getByRole('row').filter({ hasText: students[1] }).first().getByRole('cell', { name: 'not yet' })).toBeVisible();
+
+  // The catch-up answer reaches the student's history, opened from the class list.
+  await page.goto(`/classes/${classId}`);
+  await page.getByRole('link', { name: `History for ${students[0]}` }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText(students[0]);
+  const sessionsTable = page.getByRole('table', { name: 'Sessions' });
+  await expect(sessionsTable.getByRole('row').filter({ hasText: title })).toContainText('66.7%'); // right on 2 of 3 items
+  const historyCard = page.getByRole('article').filter({ hasText: title });
+  await expect(historyCard.getByRole('table').getByRole('cell', { name: lastResult })).toHaveCount(1);
+  // …and the class page, where every student has a line.
+  await page.getByRole('link', { name: 'Class trends' }).click();
+  const classStudents = page.getByRole('table', { name: 'Students of the class' });
+  await expect(classStudents.getByRole('link', { name: students[0] })).toBeVisible();
+  await expect(page.getByRole('table', { name: 'Catch-ups of the class' }).getByRole('row').filter({ hasText: title })).toContainText('1 of 4');
+
+  // Closing the catch-up stops its code; the results stay.
+  await page.getByRole('table', { name: 'Catch-ups of the class' }).getByRole('link', { name: title }).first().click();
+  await page.getByRole('button', { name: `Close catch-up ${code}` }).click();
+  await page.getByRole('alertdialog').getByRole('button', { name: 'Close catch-up' }).click();
+  await expect(catchupRow).toContainText('closed');
+  await expect(page.getByRole('button', { name: `Close catch-up ${code}` })).toHaveCount(0);
+  await student.goto(`/play/catchup/${code}`);
+  await expect(student.getByRole('alert')).toContainText(/no catch-up has that code/i);
   await phone.close();
 
   // An item page shows its distractor table.

@@ -47,6 +47,10 @@ export const routes = {
     build: (sessionId: string, itemId: string) => `/debriefs/${segment(sessionId)}/items/${segment(itemId)}`,
   },
   classTrends: { path: '/classes/:classId/trends', build: (classId: string) => `/classes/${segment(classId)}/trends` },
+  studentHistory: {
+    path: '/classes/:classId/students/:entryId',
+    build: (classId: string, entryId: string) => `/classes/${segment(classId)}/students/${segment(entryId)}`,
+  },
   adminStaff: { path: '/admin/staff', build: () => '/admin/staff' },
 } as const;
 

@@ -71,7 +71,10 @@ export const apiPaths = {
   debriefItem: (sessionId: string, itemId: string) => `/api/sessions/${id(sessionId)}/debrief/items/${id(itemId)}`,
   debriefEmail: (sessionId: string) => `/api/sessions/${id(sessionId)}/debrief/email`,
   sessionCatchups: (sessionId: string) => `/api/sessions/${id(sessionId)}/catchups`,
+  catchupResults: (sessionId: string, catchupId: string) => `/api/sessions/${id(sessionId)}/catchups/${id(catchupId)}/results`,
+  catchupClose: (sessionId: string, catchupId: string) => `/api/sessions/${id(sessionId)}/catchups/${id(catchupId)}/close`,
   gradebookCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/gradebook.csv`,
   itemAnalysisCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/item-analysis.csv`,
   classTrends: (classId: string) => `/api/classes/${id(classId)}/trends`,
+  studentHistory: (classId: string, entryId: string) => `/api/classes/${id(classId)}/roster/${id(entryId)}/history`,
 } as const;

@@ -76,6 +76,10 @@ export const appRouteObjects: RouteObject[] = [
                 lazy: async () => ({ Component: (await import('@/pages/ClassTrendsPage')).ClassTrendsPage }),
               },
               {
+                path: routes.studentHistory.path,
+                lazy: async () => ({ Component: (await import('@/pages/StudentHistoryPage')).StudentHistoryPage }),
+              },
+              {
                 element: <RequireAdmin />,
                 children: [
                   {

@@ -125,4 +125,14 @@ describe('ClassDetailPage', () => {
     expect(screen.queryByRole('button', { name: 'Import roster CSV' })).not.toBeInTheDocument();
     expect(screen.queryByLabelText('Display name')).not.toBeInTheDocument();
   });
+
+  it("links each roster row to that student's history, for a co-teacher too", async () => {
+    const [finn, zara] = roster;
+    openClass(makeClassDetail({ roster, access: 'co-teacher', ownerName: 'Maja Lindqvist' }));
+    const link = await screen.findByRole('link', { name: 'History for Finn W.' });
+    expect(link).toHaveAttribute('href', routes.studentHistory.build(CLASS_ID, finn.id));
+    expect(link).toHaveTextContent(/^History$/);
+    const zaraRow = within(screen.getByRole('table', { name: 'Roster' })).getByRole('row', { name: /Zara K\./ });
+    expect(within(zaraRow).getByRole('link', { name: 'History for Zara K.' })).toHaveAttribute('href', `/classes/${CLASS_ID}/students/${zara.id}`);
+  });
 });

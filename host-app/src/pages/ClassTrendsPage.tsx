@@ -1,5 +1,7 @@
-import { Button, Flex, Heading } from '@radix-ui/themes';
+import { Button, Flex, Heading, Text } from '@radix-ui/themes';
 import { Link, useParams } from 'react-router-dom';
+import { ClassCatchupsTable } from '@/features/debrief/components/ClassCatchupsTable';
+import { ClassStudentsTable } from '@/features/debrief/components/ClassStudentsTable';
 import { TagTrendChart } from '@/features/debrief/components/TagTrendChart';
 import { TagTrendTable } from '@/features/debrief/components/TagTrendTable';
 import { useClassTrends } from '@/features/debrief/hooks/useClassTrends';
@@ -35,7 +37,10 @@ export function ClassTrendsPage() {
   const tags = t.tags.map((x) => x.tag);
   return (
     <Flex direction="column" gap="5">
-      <PageHeader title={`Trends: ${t.className}`} description="Class accuracy by tag across ended sessions, oldest first." />
+      <PageHeader
+        title={`Trends: ${t.className}`}
+        description="Class accuracy by tag across ended sessions, oldest first; each student's figures and the class's catch-ups."
+      />
       <Flex>{back}</Flex>
       {rows.length === 0 || tags.length === 0 ? (
         <EmptyState title="No trends yet">Once this class has ended sessions with tagged items, accuracy by tag appears here.</EmptyState>
@@ -52,6 +57,26 @@ export function ClassTrendsPage() {
           <TagTrendTable tags={tags} rows={rows} />
         </section>
       )}
+      <section aria-labelledby="students-heading">
+        <Heading as="h2" size="5" id="students-heading" mb="3">
+          Students
+        </Heading>
+        {t.students.length === 0 ? (
+          <Text color="gray">No students on the class list yet.</Text>
+        ) : (
+          <ClassStudentsTable classId={t.classId} students={t.students} />
+        )}
+      </section>
+      <section aria-labelledby="catchups-heading">
+        <Heading as="h2" size="5" id="catchups-heading" mb="3">
+          Catch-ups
+        </Heading>
+        {t.catchups.length === 0 ? (
+          <Text color="gray">No catch-ups yet. Create one from a session's debrief.</Text>
+        ) : (
+          <ClassCatchupsTable catchups={t.catchups} />
+        )}
+      </section>
     </Flex>
   );
 }

@@ -1,25 +1,38 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import type { DebriefDto } from '@covalent/shared-types';
 import {
+  CATCHUP_ID,
   SESSION_ID,
   fig,
+  makeCatchupCard,
+  makeCatchupResults,
+  makeCatchupStudentResult,
+  makeCatchupSummary,
   makeDebrief,
   makeDebriefItem,
   makeDebriefStudent,
   makeMissedItem,
   noFig,
 } from '@/features/debrief/testing/debriefFactories';
+import { formatDateTime } from '@/features/debrief/utils/formatDate';
 import { routes } from '@/routes';
 import { makeApiError, makeMe } from '@/test/factories';
 import { renderApp } from '@/test/renderApp';
 import { stubFetch } from '@/test/stubFetch';
 
 const debriefUrl = `/api/sessions/${SESSION_ID}/debrief`;
+const catchupsUrl = `/api/sessions/${SESSION_ID}/catchups`;
+const closeUrl = `/api/sessions/${SESSION_ID}/catchups/${CATCHUP_ID}/close`;
 
 function renderDebrief(debrief: DebriefDto, extra: Parameters<typeof stubFetch>[0] = {}) {
-  const fetchMock = stubFetch({ 'GET /api/me': { status: 200, body: makeMe() }, [`GET ${debriefUrl}`]: { status: 200, body: debrief }, ...extra });
+  const fetchMock = stubFetch({
+    'GET /api/me': { status: 200, body: makeMe() },
+    [`GET ${debriefUrl}`]: { status: 200, body: debrief },
+    [`GET ${catchupsUrl}`]: { status: 200, body: [] },
+    ...extra,
+  });
   const view = renderApp(routes.debrief.build(SESSION_ID));
   return { ...view, fetchMock };
 }
@@ -87,7 +100,7 @@ describe('DebriefPage', () => {
           makeDebriefStudent({
             rosterName: 'Amal Haddad',
             score: 1,
-            percent: fig(1 / 3),
+            percent: fig(100 / 3),
             missed: [
               makeMissedItem({ position: 1, prompt: 'Pick the pipette', answerText: 'A. Beaker', keyText: 'B. Volumetric pipette' }),
               makeMissedItem({ itemId: 'i9', position: 2, prompt: 'Rinse order', answered: false, answer: null, answerText: '' }),
@@ -153,5 +166,141 @@ describe('DebriefPage', () => {
     renderApp(routes.debrief.build(SESSION_ID));
     expect(await screen.findByRole('alert')).toHaveTextContent('This session is still live.');
     expect(screen.getByRole('link', { name: 'Open host screen' })).toHaveAttribute('href', routes.hostSession.build(SESSION_ID));
+  });
+});
+
+const calls = (fetchMock: ReturnType<typeof stubFetch>, method: string, url: string) =>
+  fetchMock.mock.calls.filter(([input, init]) => input === url && (init?.method ?? 'GET') === method).length;
+
+async function catchupRow(code: string) {
+  const table = await screen.findByRole('table', { name: 'Catch-ups of this session' });
+  return within(table).getByRole('row', { name: new RegExp(code) });
+}
+
+describe('DebriefPage catch-ups', () => {
+  const closedOne = makeCatchupSummary({
+    id: 'c-2',
+    code: 'RT4WQZ',
+    closedAt: '2025-03-10T08:00:00.000Z',
+    startedCount: 0,
+    clearedCount: 0,
+    boxCounts: [20, 0, 0, 0, 0],
+    attempts: 0,
+    correctAttempts: 0,
+    accuracy: noFig('No catch-up answers yet.'),
+  });
+
+  it('lists each catch-up with its progress, accuracy and box counts; only an open one can be closed', async () => {
+    renderDebrief(makeDebrief(), { [`GET ${catchupsUrl}`]: { status: 200, body: [makeCatchupSummary(), closedOne] } });
+    const open = await catchupRow('KX7P2M');
+    expect(open).toHaveTextContent('open');
+    expect(open).toHaveTextContent('5 of 12');
+    expect(open).toHaveTextContent('7 of 20');
+    expect(open).toHaveTextContent('62.5%');
+    expect(open).toHaveTextContent('Box 1: 13 · Box 2: 5 · Box 3: 2 · Box 4: 0 · Box 5: 0');
+    expect(within(open).getByRole('button', { name: 'Close catch-up KX7P2M' })).toBeInTheDocument();
+
+    const closed = await catchupRow('RT4WQZ');
+    expect(closed).toHaveTextContent('closed');
+    expect(within(closed).getByText('not enough data')).toHaveAttribute('title', 'No catch-up answers yet.');
+    expect(within(closed).queryByRole('button', { name: /Close catch-up/ })).toBeNull();
+    expect(screen.getByRole('heading', { level: 2, name: 'Catch-ups' }).closest('.debrief-no-print')).not.toBeNull();
+  });
+
+  it('says so when the session has no catch-ups', async () => {
+    renderDebrief(makeDebrief());
+    expect(await screen.findByText('No catch-ups from this session yet.')).toBeInTheDocument();
+    expect(screen.queryByRole('table', { name: 'Catch-ups of this session' })).toBeNull();
+  });
+
+  it('shows one row per student and card when the results are opened, and hides them again', async () => {
+    const user = userEvent.setup();
+    const results = makeCatchupResults({
+      students: [
+        makeCatchupStudentResult({
+          rosterEntryId: 'e2',
+          displayName: 'Noor B.',
+          items: [makeCatchupCard({ prompt: 'Rinse order', box: 2, attempts: 1, correctAttempts: 1, lastCorrect: true, dueAt: '2025-03-07T10:00:00.000Z' })],
+        }),
+        makeCatchupStudentResult({
+          displayName: 'Amal H.',
+          items: [
+            makeCatchupCard({ prompt: 'Pick the pipette', attempts: 2, lastCorrect: false }),
+            makeCatchupCard({ itemId: 'i2', prompt: 'Goggles on when?' }),
+          ],
+        }),
+      ],
+    });
+    const { fetchMock } = renderDebrief(makeDebrief(), {
+      [`GET ${catchupsUrl}`]: { status: 200, body: [makeCatchupSummary()] },
+      [`GET /api/sessions/${SESSION_ID}/catchups/${CATCHUP_ID}/results`]: { status: 200, body: results },
+    });
+    const toggle = await screen.findByRole('button', { name: 'Results for catch-up KX7P2M' });
+    expect(toggle).toHaveAttribute('aria-expanded', 'false');
+    await user.click(toggle);
+
+    const table = await screen.findByRole('table', { name: 'Catch-up results KX7P2M' });
+    expect(toggle).toHaveAttribute('aria-expanded', 'true');
+    expect(screen.getByRole('heading', { name: 'Catch-up results KX7P2M' })).toBeInTheDocument();
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows.map((r) => within(r).getByRole('rowheader').textContent)).toEqual(['Amal H.', 'Amal H.', 'Noor B.']);
+    expect(within(rows[0]).getAllByRole('cell').map((c) => c.textContent)).toEqual(['Pick the pipette', '1', '2', '0', 'wrong', formatDateTime('2025-03-05T10:00:00.000Z')]);
+    expect(rows[1]).toHaveTextContent('not yet');
+    expect(within(rows[2]).getAllByRole('cell').map((c) => c.textContent)).toEqual(['Rinse order', '2', '1', '1', 'right', formatDateTime('2025-03-07T10:00:00.000Z')]);
+
+    await user.click(toggle);
+    expect(screen.queryByRole('table', { name: 'Catch-up results KX7P2M' })).toBeNull();
+    expect(calls(fetchMock, 'GET', `/api/sessions/${SESSION_ID}/catchups/${CATCHUP_ID}/results`)).toBe(1);
+  });
+
+  it('closes a catch-up only after the teacher confirms, then refetches the list', async () => {
+    const user = userEvent.setup();
+    let current = makeCatchupSummary();
+    const fetchMock = renderDebrief(makeDebrief(), {
+      [`GET ${catchupsUrl}`]: () => ({ status: 200, body: [current] }),
+      [`POST ${closeUrl}`]: () => {
+        current = { ...current, closedAt: '2025-03-06T08:00:00.000Z' };
+        return { status: 200, body: current };
+      },
+    }).fetchMock;
+
+    await user.click(await screen.findByRole('button', { name: 'Close catch-up KX7P2M' }));
+    const dialog = await screen.findByRole('alertdialog');
+    expect(dialog).toHaveTextContent('Close catch-up KX7P2M?');
+    expect(calls(fetchMock, 'POST', closeUrl)).toBe(0);
+    await user.click(within(dialog).getByRole('button', { name: 'Close catch-up' }));
+
+    await waitFor(() => expect(screen.queryByRole('button', { name: 'Close catch-up KX7P2M' })).toBeNull());
+    expect(await catchupRow('KX7P2M')).toHaveTextContent('closed');
+    expect(calls(fetchMock, 'POST', closeUrl)).toBe(1);
+    expect(calls(fetchMock, 'GET', catchupsUrl)).toBe(2);
+  });
+
+  it("shows the server's message when closing fails, and keeps the catch-up open", async () => {
+    const user = userEvent.setup();
+    renderDebrief(makeDebrief(), {
+      [`GET ${catchupsUrl}`]: { status: 200, body: [makeCatchupSummary()] },
+      [`POST ${closeUrl}`]: { status: 403, body: makeApiError('forbidden', 'Only the class owner can close this catch-up.') },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Close catch-up KX7P2M' }));
+    await user.click(within(await screen.findByRole('alertdialog')).getByRole('button', { name: 'Close catch-up' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('Only the class owner can close this catch-up.');
+    expect(await catchupRow('KX7P2M')).toHaveTextContent('open');
+  });
+
+  it('lists a newly created catch-up without a reload', async () => {
+    const user = userEvent.setup();
+    let list: ReturnType<typeof makeCatchupSummary>[] = [];
+    renderDebrief(makeDebrief(), {
+      [`GET ${catchupsUrl}`]: () => ({ status: 200, body: list }),
+      [`POST ${catchupsUrl}`]: () => {
+        list = [makeCatchupSummary({ code: 'NEW7QZ' })];
+        return { status: 201, body: { id: CATCHUP_ID, code: 'NEW7QZ', cardCount: 20 } };
+      },
+    });
+    expect(await screen.findByText('No catch-ups from this session yet.')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Create catch-up' }));
+    expect(await catchupRow('NEW7QZ')).toHaveTextContent('7 of 20');
+    expect(screen.queryByText('No catch-ups from this session yet.')).toBeNull();
   });
 });

@@ -1,6 +1,7 @@
 import { Button, Flex, Heading, Text } from '@radix-ui/themes';
 import { Link, useParams } from 'react-router-dom';
 import { ApiRequestError } from '@/api/client';
+import { CatchupsCard } from '@/features/debrief/components/CatchupsCard';
 import { CreateCatchup } from '@/features/debrief/components/CreateCatchup';
 import { DebriefActions } from '@/features/debrief/components/DebriefActions';
 import { DebriefSummary } from '@/features/debrief/components/DebriefSummary';
@@ -50,6 +51,7 @@ export function DebriefPage() {
       </Flex>
       <DebriefActions sessionId={d.sessionId} />
       {d.classId && <CreateCatchup sessionId={d.sessionId} />}
+      {d.classId && <CatchupsCard sessionId={d.sessionId} />}
       <section aria-labelledby="summary-heading">
         <Heading as="h2" size="5" id="summary-heading" mb="3">
           Summary

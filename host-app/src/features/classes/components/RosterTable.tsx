@@ -1,9 +1,11 @@
 import type { RosterEntryDto } from '@covalent/shared-types';
 import { Button, Flex, Table, TextField } from '@radix-ui/themes';
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import type { ApiRequestError } from '@/api/client';
 import { ConfirmButton } from '@/features/forms/components/ConfirmButton';
 import { FormErrorCallout } from '@/features/forms/components/FormErrorCallout';
+import { routes } from '@/routes';
 import type { RosterEntryInput } from '../hooks/useClassMutations';
 import { rosterEntryInput, type RosterRowDraft } from '../utils/rosterEntryInput';
 import { timeMultiplierLabel } from '../utils/timeMultiplierOptions';
@@ -49,6 +51,9 @@ export function RosterTable({ roster, canEdit, saving, saveError, onSave, onRemo
             <Table.ColumnHeaderCell>Table group</Table.ColumnHeaderCell>
             <Table.ColumnHeaderCell>Seat</Table.ColumnHeaderCell>
             <Table.ColumnHeaderCell>Time</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell>
+              <span className="visually-hidden">History</span>
+            </Table.ColumnHeaderCell>
             {canEdit && (
               <Table.ColumnHeaderCell>
                 <span className="visually-hidden">Actions</span>
@@ -81,6 +86,7 @@ export function RosterTable({ roster, canEdit, saving, saveError, onSave, onRemo
                     onChange={(timeMultiplier) => setDraft({ ...draft, timeMultiplier })}
                   />
                 </Table.Cell>
+                <Table.Cell />
                 <Table.Cell>
                   <Flex gap="2">
                     <Button size="1" loading={saving} onClick={() => onSave(entry.id, rosterEntryInput(draft), stopEdit)}>
@@ -98,6 +104,11 @@ export function RosterTable({ roster, canEdit, saving, saveError, onSave, onRemo
                 <Table.Cell>{entry.tableGroup ?? '—'}</Table.Cell>
                 <Table.Cell>{entry.seatNumber ?? '—'}</Table.Cell>
                 <Table.Cell>{timeMultiplierLabel(entry.timeMultiplier)}</Table.Cell>
+                <Table.Cell>
+                  <Link to={routes.studentHistory.build(entry.classId, entry.id)} aria-label={`History for ${entry.displayName}`}>
+                    History
+                  </Link>
+                </Table.Cell>
                 {canEdit && (
                   <Table.Cell>
                     <Flex gap="2" justify="end">

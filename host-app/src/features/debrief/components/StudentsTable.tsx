@@ -1,6 +1,6 @@
 import type { DebriefStudentDto, MissedItemDto } from '@covalent/shared-types';
 import { Table, Text } from '@radix-ui/themes';
-import { formatShare } from '../utils/formatFigure';
+import { formatPercentValue } from '../utils/formatPercentValue';
 import { FigureText } from './FigureText';
 
 export interface StudentsTableProps {
@@ -66,7 +66,7 @@ export function StudentsTable({ students }: StudentsTableProps) {
               </Table.RowHeaderCell>
               <Table.Cell>{s.score === null ? '—' : s.score.toFixed(2)}</Table.Cell>
               <Table.Cell>
-                <FigureText figure={s.percent} format={formatShare} />
+                <FigureText figure={s.percent} format={formatPercentValue} />
               </Table.Cell>
               <Table.Cell>{s.answered}</Table.Cell>
               <Table.Cell>

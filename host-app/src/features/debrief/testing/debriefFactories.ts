@@ -1,4 +1,9 @@
 import type {
+  CatchupCardResultDto,
+  CatchupResultsDto,
+  CatchupStudentResultDto,
+  CatchupSummaryDto,
+  ClassStudentTrendDto,
   ClassTrendDto,
   DebriefDto,
   DebriefItemDto,
@@ -8,11 +13,16 @@ import type {
   DistractorRowDto,
   FigureDto,
   MissedItemDto,
+  StudentCatchupDto,
+  StudentHistoryDto,
+  StudentSessionDto,
 } from '@covalent/shared-types';
 
 /** Debrief test data in one place; override only what a test is about. */
 export const SESSION_ID = '7c1e0a00-0000-4000-8000-000000000001';
 export const CLASS_ID = '7c1e0a00-0000-4000-8000-0000000000c1';
+export const CATCHUP_ID = '7c1e0a00-0000-4000-8000-0000000000a1';
+export const ENTRY_ID = '7c1e0a00-0000-4000-8000-0000000000e1';
 
 export const fig = (value: number): FigureDto => ({ value, reason: null });
 export const noFig = <T = number>(reason: string): FigureDto<T> => ({ value: null, reason });
@@ -111,7 +121,8 @@ export function makeDebriefStudent(overrides: Partial<DebriefStudentDto> = {}): 
     rosterName: 'Amal Haddad',
     teamId: 't1',
     score: 2,
-    percent: fig(2 / 3),
+    // A student's percent is 0..100 on the wire (the debrief's percentOf).
+    percent: fig(200 / 3),
     answered: 3,
     missed: [],
     removed: false,
@@ -145,6 +156,109 @@ export function makeClassTrend(overrides: Partial<ClassTrendDto> = {}): ClassTre
       },
       { tag: 'safety', points: [{ sessionId: 's2', endedAt: '2025-03-11T09:40:00.000Z', itemCount: 4, accuracy: fig(0.9) }] },
     ],
+    catchups: [],
+    students: [],
+    ...overrides,
+  };
+}
+
+export function makeCatchupSummary(overrides: Partial<CatchupSummaryDto> = {}): CatchupSummaryDto {
+  return {
+    id: CATCHUP_ID,
+    sessionId: SESSION_ID,
+    bankTitle: 'Lab glassware',
+    code: 'KX7P2M',
+    createdAt: '2025-03-04T10:00:00.000Z',
+    closedAt: null,
+    studentCount: 12,
+    startedCount: 5,
+    cardCount: 20,
+    clearedCount: 7,
+    boxCounts: [13, 5, 2, 0, 0],
+    attempts: 16,
+    correctAttempts: 10,
+    accuracy: fig(0.625),
+    ...overrides,
+  };
+}
+
+export function makeCatchupCard(overrides: Partial<CatchupCardResultDto> = {}): CatchupCardResultDto {
+  return {
+    itemId: '7c1e0a00-0000-4000-8000-0000000000i1',
+    prompt: 'Which glassware measures 25.00 mL most accurately?',
+    box: 1,
+    dueAt: '2025-03-05T10:00:00.000Z',
+    attempts: 0,
+    correctAttempts: 0,
+    lastCorrect: null,
+    lastAnsweredAt: null,
+    ...overrides,
+  };
+}
+
+export function makeCatchupStudentResult(overrides: Partial<CatchupStudentResultDto> = {}): CatchupStudentResultDto {
+  return { rosterEntryId: ENTRY_ID, displayName: 'Amal H.', items: [makeCatchupCard()], ...overrides };
+}
+
+export function makeCatchupResults(overrides: Partial<CatchupResultsDto> = {}): CatchupResultsDto {
+  return {
+    id: CATCHUP_ID,
+    sessionId: SESSION_ID,
+    code: 'KX7P2M',
+    createdAt: '2025-03-04T10:00:00.000Z',
+    closedAt: null,
+    students: [makeCatchupStudentResult()],
+    ...overrides,
+  };
+}
+
+export function makeClassStudentTrend(overrides: Partial<ClassStudentTrendDto> = {}): ClassStudentTrendDto {
+  return { rosterEntryId: ENTRY_ID, displayName: 'Amal H.', sessionsPlayed: 2, meanPercent: fig(60), openCards: 3, clearedCards: 1, ...overrides };
+}
+
+export function makeStudentSession(overrides: Partial<StudentSessionDto> = {}): StudentSessionDto {
+  return {
+    sessionId: SESSION_ID,
+    bankTitle: 'Lab glassware',
+    playedAt: '2025-03-04T09:15:00.000Z',
+    endedAt: '2025-03-04T09:40:00.000Z',
+    format: 'huddle',
+    score: 2,
+    // Student percents are 0..100 on the wire; catch-up accuracy is a 0..1 share.
+    percent: fig(200 / 3),
+    itemCount: 3,
+    answered: 3,
+    missed: [],
+    ...overrides,
+  };
+}
+
+export function makeStudentCatchup(overrides: Partial<StudentCatchupDto> = {}): StudentCatchupDto {
+  return {
+    catchupId: CATCHUP_ID,
+    sessionId: SESSION_ID,
+    bankTitle: 'Lab glassware',
+    createdAt: '2025-03-04T10:00:00.000Z',
+    closedAt: null,
+    cardCount: 1,
+    clearedCount: 0,
+    attempts: 0,
+    correctAttempts: 0,
+    items: [makeCatchupCard()],
+    ...overrides,
+  };
+}
+
+export function makeStudentHistory(overrides: Partial<StudentHistoryDto> = {}): StudentHistoryDto {
+  return {
+    classId: CLASS_ID,
+    className: 'Chemistry 10B',
+    rosterEntryId: ENTRY_ID,
+    displayName: 'Amal H.',
+    tableGroup: '3',
+    sessions: [makeStudentSession()],
+    catchups: [makeStudentCatchup()],
+    meanPercent: fig(200 / 3),
     ...overrides,
   };
 }

@@ -1,0 +1,10 @@
+export { CatchupItemsTable } from './components/CatchupItemsTable';
+export { HistoryBackLinks } from './components/HistoryBackLinks';
+export { HistorySessionsTable } from './components/HistorySessionsTable';
+export { HistorySummary } from './components/HistorySummary';
+export { MissedItemsList } from './components/MissedItemsList';
+export { StudentCatchupCard } from './components/StudentCatchupCard';
+export { useStudentHistory } from './hooks/useStudentHistory';
+export { formatScore } from './utils/formatScore';
+export { historyQueryKeys } from './utils/historyQueryKeys';
+export { tableGroupLabel } from './utils/tableGroupLabel';
