@@ -72,7 +72,9 @@ function serverPid(child) {
 }
 
 async function startReal() {
-  const child = start('real', 1, process.execPath, ['--expose-gc', 'server/dist/main.js'], {
+  // BENCH_SERVER_NODE_ARGS: extra node flags for the server, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof" to profile a run.
+  const extra = (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = start('real', 1, process.execPath, [...extra, '--expose-gc', 'server/dist/main.js'], {
     NODE_ENV: 'production', PORT: String(REAL_PORT), HOST: '127.0.0.1', LOG_LEVEL: 'warn', DATABASE_URL,
     APP_SECRET: 'bench-secret-bench-secret-bench-secret-01', PUBLIC_URL: `http://127.0.0.1:${REAL_PORT}`,
     BENCH_METRICS: 'true', PLAY_JOIN_LIMIT: '100000', SIGNIN_LIMIT: '100000', DATABASE_POOL_SIZE: '20',

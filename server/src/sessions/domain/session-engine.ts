@@ -187,14 +187,29 @@ export class SessionEngine {
     return this.state.status;
   }
 
-  get config(): SessionConfig {
-    return structuredClone(this.state.config);
+  /** The session's settings, not copied (they never change after creation): read, never write. */
+  get config(): Readonly<SessionConfig> {
+    return this.state.config;
   }
 
   /** The current round (a copy), or null before start. */
   currentRound(): RoundState | null {
     const round = this.round();
     return round ? structuredClone(round) : null;
+  }
+
+  /**
+   * The current round itself, not a copy: for reading at once (a view, a timing), never for
+   * keeping or changing. The hot paths use it; copying a round with every answer in it per call
+   * was a large share of the server's time under load (bench profile).
+   */
+  peekRound(): Readonly<RoundState> | null {
+    return this.round() ?? null;
+  }
+
+  /** The whole state itself, not a copy (see `peekRound`): for serialising at once. */
+  peekState(): Readonly<SessionState> {
+    return this.state;
   }
 
   player(playerId: string): PlayerState | null {

@@ -653,7 +653,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   /** Acknowledged only once the row is committed; a resend returns the first acceptance. */
   submit(s: LiveSession, playerId: string, payload: Omit<SubmitAnswerPayload, 'response'> & { response: unknown }): Promise<SubmitAck> {
     return s.queue.run(async (): Promise<SubmitAck> => {
-      const round = s.engine.currentRound();
+      const round = s.engine.peekRound();
       if (!round || payload.roundIndex !== round.index) {
         const earlier = await this.store.findResponse(playerId, payload.clientMessageId);
         if (earlier) return { ok: true, duplicate: true, locked: earlier.locked, acceptedAt: earlier.receivedAt };
@@ -709,7 +709,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   /** huddle: lock the current vote in. Stored as its own row so a restart keeps it. */
   lock(s: LiveSession, playerId: string, roundIndex: number): Promise<{ ok: true } | Fail> {
     return s.queue.run(async () => {
-      const round = s.engine.currentRound();
+      const round = s.engine.peekRound();
       if (!round || round.index !== roundIndex) return fail('round_not_open', 'That round is not open.');
       const before = s.engine.checkpoint();
       const at = this.clock.now();
@@ -797,7 +797,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
   private broadcast(s: LiveSession, events: EngineEvent[]): void {
     const players = () => s.activePlayers();
     const timings = () => {
-      const round = s.engine.currentRound();
+      const round = s.engine.peekRound();
       if (round) for (const p of players()) this.emitter.toPlayer(p.id, 'round:timing', timing(s, round, p.id));
     };
     for (const e of events) {
@@ -816,7 +816,7 @@ export class LiveSessionsService implements OnApplicationBootstrap, OnModuleDest
           for (const p of players()) this.emitter.toPlayer(p.id, 'session:state', playerView(s, p.id));
           break;
         case 'round_opened': {
-          const round = s.engine.currentRound();
+          const round = s.engine.peekRound();
           if (!round) break;
           const item = itemView(s, round.index);
           for (const p of players()) {

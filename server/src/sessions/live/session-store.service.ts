@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { ItemResponse } from '@covalent/shared-types';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
+import type { PostgresDriver } from 'typeorm/driver/postgres/PostgresDriver';
 import { ClassEntity } from '../../classes/entities/class.entity';
 import { PairRuleEntity } from '../../classes/entities/pair-rule.entity';
 import type { PairingHistory } from '../../mixer/domain';
@@ -72,9 +73,18 @@ export class SessionStore {
     return this.db.transaction(fn);
   }
 
+  /**
+   * The pg pool under TypeORM. The answer path's single statement goes to it directly: TypeORM's
+   * query runner per call (acquire, log, broadcast, release) was a visible share of the server's
+   * time per answer in the bench profile. Same pool, same connections, same errors.
+   */
+  private get pool(): { query(sql: string, params: unknown[]): Promise<{ rows: { seq: string }[] }> } {
+    return (this.db.driver as PostgresDriver).master;
+  }
+
   /** Inserts an accepted answer; null when (player, clientMessageId) is already stored. Committed when this resolves. */
   async insertResponse(r: NewResponse): Promise<{ seq: number } | null> {
-    const rows: { seq: string }[] = await this.db.query(
+    const { rows } = await this.pool.query(
       `INSERT INTO responses (session_id, round_index, player_id, team_id, client_message_id, kind, response, locked, elapsed_ms, received_at)
        VALUES ($1, $2, $3, $4, $5, $6, $7::jsonb, $8, $9, $10)
        ON CONFLICT (player_id, client_message_id) DO NOTHING
@@ -95,41 +105,44 @@ export class SessionStore {
    * closed), inside the caller's transaction. Returns the rounds whose results it stored.
    */
   async saveState(s: LiveSession, m: EntityManager): Promise<number[]> {
-    const snapshot = s.engine.toSnapshot();
-    const resultRounds = snapshot.rounds
-      .filter((r) => r.results && (r.status === 'revealed' || snapshot.status === 'ended') && !s.resultsStored.has(r.index))
-      .map((r) => r.index);
+    // Everything is read from the live state before the first await: no copy of the state is needed,
+    // and nothing can change it meanwhile (callers hold the session's queue, and this does not wait first).
+    const state = s.engine.peekState();
+    const snapshotJson = JSON.stringify(encodeSnapshot(state));
+    const status = state.status;
+    const at = (ms: number | null) => (ms === null ? null : new Date(ms));
+    const rounds = state.rounds;
+    const roundColumns = [
+      rounds.map((r) => r.index),
+      rounds.map((r) => r.itemId),
+      rounds.map((r) => r.status),
+      rounds.map((r) => at(r.openedAt)),
+      rounds.map((r) => at(r.closedAt)),
+      rounds.map((r) => at(r.revealedAt)),
+      rounds.map((r) => r.closeReason),
+    ];
+    const results = rounds
+      .filter((r) => r.results && (r.status === 'revealed' || status === 'ended') && !s.resultsStored.has(r.index))
+      .map((r) => ({ index: r.index, answered: r.results!.players.filter((p) => p.answered).map((p) => ({ ...p })) }));
+    const resultRounds = results.map((r) => r.index);
     const meta = s.meta;
     await m.query(
       `UPDATE sessions SET status = $2, snapshot = $3::jsonb, snapshot_seq = $4, snapshot_at = now(), joining_locked = $5,
          mixer_seed = $6, mixer_summary = $7::jsonb, started_at = $8, ended_at = $9, updated_at = now()
        WHERE id = $1`,
-      [meta.id, snapshot.status, JSON.stringify(encodeSnapshot(snapshot)), s.lastSeq, meta.joiningLocked, meta.mixerSeed,
+      [meta.id, status, snapshotJson, s.lastSeq, meta.joiningLocked, meta.mixerSeed,
         meta.mixerSummary === null ? null : JSON.stringify(meta.mixerSummary), meta.startedAt, meta.endedAt],
     );
-    if (snapshot.rounds.length) {
-      const at = (ms: number | null) => (ms === null ? null : new Date(ms));
+    if (rounds.length) {
       await m.query(
         `INSERT INTO session_rounds (session_id, "index", item_id, status, opened_at, closed_at, revealed_at, close_reason)
          SELECT $1, * FROM unnest($2::int[], $3::uuid[], $4::text[], $5::timestamptz[], $6::timestamptz[], $7::timestamptz[], $8::text[])
          ON CONFLICT (session_id, "index") DO UPDATE SET status = EXCLUDED.status, opened_at = EXCLUDED.opened_at,
            closed_at = EXCLUDED.closed_at, revealed_at = EXCLUDED.revealed_at, close_reason = EXCLUDED.close_reason, updated_at = now()`,
-        [
-          meta.id,
-          snapshot.rounds.map((r) => r.index),
-          snapshot.rounds.map((r) => r.itemId),
-          snapshot.rounds.map((r) => r.status),
-          snapshot.rounds.map((r) => at(r.openedAt)),
-          snapshot.rounds.map((r) => at(r.closedAt)),
-          snapshot.rounds.map((r) => at(r.revealedAt)),
-          snapshot.rounds.map((r) => r.closeReason),
-        ],
+        [meta.id, ...roundColumns],
       );
     }
-    for (const index of resultRounds) {
-      const results = snapshot.rounds[index]?.results;
-      if (!results) continue;
-      const answered = results.players.filter((p) => p.answered);
+    for (const { index, answered } of results) {
       // Each player's last answer of the round is the one that counted.
       await m.query(
         `UPDATE responses r SET credit = v.credit, correct = v.correct, points = v.points, final = true, updated_at = now()

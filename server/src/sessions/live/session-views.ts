@@ -125,7 +125,7 @@ function playerSummary(s: LiveSession, playerId: string): PlayerSessionView['sum
   return { answered, correct, points, itemCount: s.meta.items.length };
 }
 
-export function playerView(s: LiveSession, playerId: string, round: RoundState | null = s.engine.currentRound()): PlayerSessionView {
+export function playerView(s: LiveSession, playerId: string, round: RoundState | null = s.engine.peekRound()): PlayerSessionView {
   const p = s.players.get(playerId);
   if (!p) throw new Error(`unknown player ${playerId}`);
   const team = p.teamId ? s.teams.find((t) => t.id === p.teamId) : undefined;
@@ -222,7 +222,7 @@ function endSummary(s: LiveSession): HostSessionView['summary'] {
 }
 
 export function hostView(s: LiveSession): HostSessionView {
-  const round = s.engine.currentRound();
+  const round = s.engine.peekRound();
   let roundView: HostSessionView['round'] = null;
   if (round) {
     const results = s.revealed.get(round.index);

@@ -9,7 +9,7 @@ export interface StoredSnapshot extends Omit<SessionState, 'acceptances'> {
   acceptances: Acceptance[] | Record<string, Acceptance>;
 }
 
-export function encodeSnapshot(state: SessionState): StoredSnapshot {
+export function encodeSnapshot(state: Readonly<SessionState>): StoredSnapshot {
   return { ...state, acceptances: Object.values(state.acceptances) };
 }
 
