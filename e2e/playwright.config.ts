@@ -7,7 +7,15 @@ const root = join(__dirname, '..');
 export const E2E_PORT = Number(process.env.E2E_PORT ?? 3100);
 export const E2E_SMTP_PORT = Number(process.env.E2E_SMTP_PORT ?? 2626);
 export const E2E_MAIL_HTTP_PORT = Number(process.env.E2E_MAIL_HTTP_PORT ?? 8126);
+export const E2E_OIDC_PORT = Number(process.env.E2E_OIDC_PORT ?? 9126);
 const baseURL = `http://127.0.0.1:${E2E_PORT}`;
+const oidcIssuer = `http://127.0.0.1:${E2E_OIDC_PORT}`;
+// The local demo sign-on provider's one client; the server gets the same values.
+const oidcClient = {
+  OIDC_CLIENT_ID: 'covalent-e2e',
+  OIDC_CLIENT_SECRET: 'e2e-sign-on-client-secret-local-only',
+  OIDC_REDIRECT_URI: `${baseURL}/api/auth/sign-on/callback`,
+};
 
 export default defineConfig({
   testDir: '.',
@@ -36,6 +44,14 @@ export default defineConfig({
       timeout: 20_000,
     },
     {
+      command: `node server/dev/oidc-provider.mjs ${E2E_OIDC_PORT}`,
+      cwd: root,
+      url: `${oidcIssuer}/.well-known/openid-configuration`,
+      reuseExistingServer: false,
+      timeout: 20_000,
+      env: oidcClient,
+    },
+    {
       command: 'node server/dist/main.js',
       cwd: root,
       url: `${baseURL}/api/health`,
@@ -53,6 +69,8 @@ export default defineConfig({
         HOST_APP_DIST: join(root, 'host-app/dist'),
         PLAYER_APP_DIST: join(root, 'player-app/dist'),
         LOG_LEVEL: 'warn',
+        OIDC_ISSUER: oidcIssuer,
+        ...oidcClient,
       },
     },
   ],

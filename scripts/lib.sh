@@ -52,6 +52,20 @@ as_pg() {
   fi
 }
 
+# wait_http URL SECONDS: until URL answers 2xx (node's fetch: no curl needed on a fresh machine).
+wait_http() {
+  node -e '
+    const [url, seconds] = process.argv.slice(1);
+    const end = Date.now() + Number(seconds) * 1000;
+    (async () => {
+      while (Date.now() < end) {
+        try { if ((await fetch(url)).ok) process.exit(0); } catch {}
+        await new Promise((r) => setTimeout(r, 500));
+      }
+      process.exit(1);
+    })();' "$1" "$2"
+}
+
 port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
 pg_running() { [ -f "$PGDATA_DIR/postmaster.pid" ] && as_pg "$(pg_bin_dir)/pg_ctl" -D "$PGDATA_DIR" status >/dev/null 2>&1; }

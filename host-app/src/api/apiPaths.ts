@@ -27,6 +27,9 @@ export const apiPaths = {
   passwordResetRequests: '/api/auth/password-reset-requests',
   passwordReset: '/api/auth/password-reset',
   acceptInvitation: '/api/auth/invitations/accept',
+  authConfig: '/api/auth/config',
+  /** School sign-on: a full-page navigation to the server, which redirects to the provider. */
+  signOn: (next?: string) => withQuery('/api/auth/sign-on', { next }),
   staff: '/api/admin/users',
   staffInvitations: '/api/admin/users/invitations',
   staffDeactivate: (userId: string) => `/api/admin/users/${id(userId)}/deactivate`,

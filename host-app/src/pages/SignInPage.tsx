@@ -1,8 +1,10 @@
 import { Button, Callout, Flex, Heading, Link as ThemeLink, Text } from '@radix-ui/themes';
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { SchoolSignOn } from '@/features/auth/components/SchoolSignOn';
 import { useSignIn } from '@/features/auth/hooks/useSignIn';
 import { safeNextPath } from '@/features/auth/utils/safeNextPath';
+import { signOnErrorMessage } from '@/features/auth/utils/signOnErrorMessage';
 import { FormErrorCallout } from '@/features/forms/components/FormErrorCallout';
 import { FormField } from '@/features/forms/components/FormField';
 import { routes } from '@/routes';
@@ -15,6 +17,9 @@ export function SignInPage() {
   const navigate = useNavigate();
   const signIn = useSignIn();
   const signedOut = useSignOutStore((s) => s.signedOut);
+  const next = safeNextPath(searchParams.get('next'));
+  // A school sign-on that failed comes back here with ?error=<code>.
+  const signOnError = signOnErrorMessage(searchParams.get('error'));
 
   const onSubmit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -22,7 +27,7 @@ export function SignInPage() {
       { email: email.trim(), password },
       {
         onSuccess: () => {
-          void navigate(safeNextPath(searchParams.get('next')) ?? routes.dashboard.path, { replace: true });
+          void navigate(next ?? routes.dashboard.path, { replace: true });
         },
       },
     );
@@ -35,12 +40,12 @@ export function SignInPage() {
         <Heading as="h1" size="6" id="sign-in-heading">
           Sign in
         </Heading>
-        {signedOut && !signIn.error && (
+        {signedOut && !signIn.error && !signOnError && (
           <Callout.Root role="status" variant="surface">
             <Callout.Text>You have signed out.</Callout.Text>
           </Callout.Root>
         )}
-        <FormErrorCallout message={signIn.error?.message} />
+        <FormErrorCallout message={signIn.error?.message ?? signOnError} />
         <FormField
           label="E-mail"
           type="email"
@@ -71,7 +76,9 @@ export function SignInPage() {
             </ThemeLink>
           </Text>
         </Flex>
+        <SchoolSignOn next={next} />
       </form>
     </Flex>
   );
 }
+

@@ -6,9 +6,10 @@ import { CurrentUser, Public } from '../common/decorators';
 import { appConfig } from '../config/app.config';
 import { UserEntity } from '../users/entities/user.entity';
 import { toMeDto } from '../users/users.mapper';
-import { SESSION_COOKIE, SESSION_TTL_MS } from './auth.constants';
+import { SESSION_COOKIE } from './auth.constants';
 import { AuthService } from './auth.service';
 import { PasswordResetRequestDto, SetPasswordDto, SignInDto } from './dto/auth.dto';
+import { setSessionCookie } from './session-cookie';
 import { SignInThrottlerGuard } from './sign-in-throttler.guard';
 
 @Controller()
@@ -71,12 +72,6 @@ export class AuthController {
   }
 
   private setCookie(res: Response, token: string): void {
-    res.cookie(SESSION_COOKIE, token, {
-      httpOnly: true,
-      sameSite: 'lax',
-      secure: this.config.cookieSecure,
-      path: '/',
-      maxAge: SESSION_TTL_MS,
-    });
+    setSessionCookie(res, token, this.config.cookieSecure);
   }
 }

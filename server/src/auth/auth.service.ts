@@ -48,6 +48,11 @@ export class AuthService {
     return { token: await this.createSession(user.id), user };
   }
 
+  /** The user with this e-mail (trimmed and lower-cased, as stored), active or not; for school sign-on. */
+  findUserByEmail(email: string): Promise<UserEntity | null> {
+    return this.users.findOne({ where: { email: email.trim().toLowerCase() }, relations: { school: true } });
+  }
+
   async createSession(userId: string): Promise<string> {
     const token = newSecret();
     await this.sessions.insert({ tokenHash: hashSecret(token), userId, expiresAt: new Date(this.clock.now() + SESSION_TTL_MS) });

@@ -1,5 +1,49 @@
 import { plainToInstance } from 'class-transformer';
-import { IsBooleanString, IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
+import {
+  IsBooleanString,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Max,
+  Min,
+  MinLength,
+  Validate,
+  ValidateIf,
+  validateSync,
+  ValidatorConstraint,
+  ValidatorConstraintInterface,
+} from 'class-validator';
+
+const LOOPBACK_HOSTS = new Set(['127.0.0.1', 'localhost', '[::1]']);
+
+/** True for an http(s) URL on this machine (the local development provider). */
+export function isLoopbackUrl(value: string): boolean {
+  try {
+    return LOOPBACK_HOSTS.has(new URL(value).hostname);
+  } catch {
+    return false;
+  }
+}
+
+/** An OpenID issuer must be https (OpenID Connect Discovery 1.0 §3), except a provider on loopback. */
+@ValidatorConstraint({ name: 'secureIssuer' })
+class SecureIssuerConstraint implements ValidatorConstraintInterface {
+  validate(value: unknown): boolean {
+    if (typeof value !== 'string') return false;
+    try {
+      const url = new URL(value);
+      return url.protocol === 'https:' || (url.protocol === 'http:' && isLoopbackUrl(value));
+    } catch {
+      return false;
+    }
+  }
+  defaultMessage(): string {
+    return 'must be an https URL (plain http only for a provider on 127.0.0.1 or localhost)';
+  }
+}
 
 /** Every environment variable the server reads. Validated once at boot. */
 export class EnvironmentVariables {
@@ -75,6 +119,25 @@ export class EnvironmentVariables {
   /** Where uploaded images are kept; a relative path is taken from the repository root. */
   @IsString() @MinLength(1)
   MEDIA_DIR: string = '.data/media';
+
+  /** School sign-on (OpenID Connect): the provider's issuer. Sign-on is off when unset. */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
+  @Validate(SecureIssuerConstraint)
+  OIDC_ISSUER?: string;
+
+  /** Required with OIDC_ISSUER: the client registered for Covalent at the provider. */
+  @ValidateIf((env: EnvironmentVariables) => !!env.OIDC_ISSUER)
+  @IsString() @IsNotEmpty({ message: 'is required when OIDC_ISSUER is set' })
+  OIDC_CLIENT_ID?: string;
+
+  @ValidateIf((env: EnvironmentVariables) => !!env.OIDC_ISSUER)
+  @IsString() @IsNotEmpty({ message: 'is required when OIDC_ISSUER is set' })
+  OIDC_CLIENT_SECRET?: string;
+
+  /** Defaults to PUBLIC_URL + /api/auth/sign-on/callback; must match the provider's registration exactly. */
+  @IsOptional() @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
+  OIDC_REDIRECT_URI?: string;
 }
 
 /** ConfigModule `validate` hook: fails fast, naming every bad variable at once. */

@@ -55,14 +55,17 @@ export class ServerProcess {
     return this.child !== null && this.child.exitCode === null && this.child.signalCode === null;
   }
 
-  /** Starts the built server on a free port and waits until /api/health answers 200. */
-  static async start(extraEnv: Record<string, string> = {}): Promise<ServerProcess> {
+  /**
+   * Starts the built server on a free port (or `opts.port`, for a peer that must know it first,
+   * like a sign-on provider's redirect URI) and waits until /api/health answers 200.
+   */
+  static async start(extraEnv: Record<string, string> = {}, opts: { port?: number } = {}): Promise<ServerProcess> {
     if (!existsSync(SERVER_MAIN)) {
       throw new Error(`${SERVER_MAIN} is missing: build the server first (cd server && npx tsc -p tsconfig.build.json).`);
     }
     const databaseUrl = process.env.DATABASE_URL;
     if (!databaseUrl) throw new Error('DATABASE_URL is not set: run the suites through `npm test`.');
-    const port = await freePort();
+    const port = opts.port ?? (await freePort());
     // Nothing listens on this port: mail sending fails, which no fault suite needs.
     const smtpPort = await freePort();
     const sp = new ServerProcess(port, {
