@@ -175,7 +175,14 @@ export class SessionEngine {
       ...s,
       teams: s.teams.map((t) => ({ ...t })),
       players: s.players.map((p) => ({ ...p })),
-      rounds: s.rounds.map((r, i) => (i === s.currentRound ? structuredClone(r) : r)),
+      // Of the current round, submit and lockIn change the scalars, answers (pushed or edited field
+      // by field), the vote log (pushed) and, when they close the round, open pauses; roster, units
+      // and calls stay as they are. Copying just those is several times cheaper than a deep clone.
+      rounds: s.rounds.map((r, i) =>
+        i === s.currentRound
+          ? { ...r, pauses: r.pauses.map((p) => ({ ...p })), answers: r.answers.map((a) => ({ ...a })), voteLog: [...r.voteLog] }
+          : r,
+      ),
       callQueue: [...s.callQueue],
       acceptances: { ...s.acceptances },
     };

@@ -97,6 +97,28 @@ describe(`${SessionEngine.name} snapshots`, () => {
     expect(rolledBack.toSnapshot()).toEqual(full);
   });
 
+  it('rolls back a submit that closed the round (the last lock-in) through checkpoint()', () => {
+    // The answer that makes every unit locked closes the round: status, closedAt, results and open
+    // pauses all change, and a failed insert must undo every one of them.
+    const clock = new FakeClock();
+    const { engine } = makeSession(huddleSpec);
+    must(engine.start());
+    must(engine.openRound());
+    clock.at(2_000);
+    must(engine.pause());
+    clock.at(3_000);
+    must(engine.resume());
+    for (const id of ['a1', 'a2']) must(engine.submit({ playerId: id, clientMessageId: `c-${id}`, response: pick('a'), lock: true }));
+    const full = engine.toSnapshot();
+    const cheap = engine.checkpoint();
+    const last = engine.submit({ playerId: 'b1', clientMessageId: 'c-b1', response: pick('b'), lock: true });
+    must(last);
+    expect(engine.currentRound()?.status).toBe('closed');
+    const rolledBack = SessionEngine.fromSnapshot(cheap, makeDeps(huddleSpec, clock), { fastForwardRng: false });
+    expect(rolledBack.toSnapshot()).toEqual(full);
+    expect(rolledBack.currentRound()?.status).toBe('open');
+  });
+
   it('is plain JSON', () => {
     const { engine } = makeSession(huddleSpec);
     run(engine, new FakeClock(), huddleScript().slice(0, 5));
