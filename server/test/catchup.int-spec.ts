@@ -220,7 +220,7 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
 
     const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
     const history = (await agent.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body;
-    expect(history).toMatchObject({ rosterEntryId: ben.id, displayName: 'Ben Q.', className: 'Chemistry' });
+    expect(history).toMatchObject({ rosterEntryId: ben.id, displayName: 'Ben Q.', className: 'Chemistry', canDeleteData: true });
     // Ben answered the true/false item wrong and the single item right in the session: 1 of 2.
     expect(history.sessions).toHaveLength(1);
     expect(history.sessions[0]).toMatchObject({ sessionId, score: 1, itemCount: 2, answered: 2, percent: { value: 50 } });
@@ -251,6 +251,17 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     expect((await agent.get(`/api/classes/${otherClass.id}/roster/${ben.id}/history`).expect(404)).body.error).toBe('not_found');
     const empty = (await agent.get(`/api/classes/${otherClass.id}/trends`).expect(200)).body;
     expect(empty).toMatchObject({ sessions: [], tags: [], catchups: [], students: [] });
+  });
+
+  it('lets a co-teacher read a student\u2019s history but not delete it', async () => {
+    const { agent, stranger, sessionId, ben } = await endedClassSession();
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    await agent.post(`/api/classes/${cls}/co-teachers`).send({ email: stranger.email }).expect(200);
+    const co = await signedIn(http, stranger);
+    const history = (await co.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body;
+    expect(history).toMatchObject({ displayName: 'Ben Q.', canDeleteData: false });
+    expect((await co.delete(`/api/classes/${cls}/roster/${ben.id}/data`).expect(403)).body).toMatchObject({ ok: false, error: 'forbidden' });
+    expect((await co.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body.sessions).toHaveLength(1);
   });
 
   it('deletes a student\u2019s catch-up cards with their session data, and the history then shows nothing of them', async () => {

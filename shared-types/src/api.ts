@@ -34,3 +34,20 @@ export interface StaffUserDto {
   activated: boolean;
   createdAt: string;
 }
+
+/** `GET`/`PATCH /api/admin/school`: the admin's own school and how long it keeps player data. */
+export interface SchoolSettingsDto {
+  id: string;
+  name: string;
+  /** Days nicknames and responses are kept after a session ends; a daily job deletes older ones. */
+  retentionDays: number;
+}
+
+/** Bounds of {@link SchoolSettingsDto.retentionDays}, as the server checks them. */
+export const RETENTION_DAYS_MIN = 1;
+export const RETENTION_DAYS_MAX = 3650;
+
+/** `PATCH /api/admin/school` body. */
+export interface UpdateSchoolSettingsRequest {
+  retentionDays: number;
+}

@@ -163,6 +163,8 @@ export interface StudentHistoryDto {
   catchups: StudentCatchupDto[];
   /** Mean of the session percents (0..100, as the debrief's student percent) that could be computed. */
   meanPercent: FigureDto;
+  /** The class's owner may delete this student's data (DELETE …/roster/:entryId/data); co-teachers and admins read only. */
+  canDeleteData: boolean;
 }
 
 /** One student's line on the class page. */

@@ -34,6 +34,7 @@ export const apiPaths = {
   staffInvitations: '/api/admin/users/invitations',
   staffDeactivate: (userId: string) => `/api/admin/users/${id(userId)}/deactivate`,
   staffReactivate: (userId: string) => `/api/admin/users/${id(userId)}/reactivate`,
+  adminSchool: '/api/admin/school',
 
   banks: (query: BankListQuery = {}) => withQuery('/api/banks', { ...query }),
   bankCreate: '/api/banks',
@@ -80,4 +81,8 @@ export const apiPaths = {
   itemAnalysisCsv: (sessionId: string) => `/api/sessions/${id(sessionId)}/exports/item-analysis.csv`,
   classTrends: (classId: string) => `/api/classes/${id(classId)}/trends`,
   studentHistory: (classId: string, entryId: string) => `/api/classes/${id(classId)}/roster/${id(entryId)}/history`,
+  /** DELETE: one student's data across the class's ended sessions (the class's owner). */
+  rosterEntryData: (classId: string, entryId: string) => `/api/classes/${id(classId)}/roster/${id(entryId)}/data`,
+  /** DELETE: one player's data in one ended session. */
+  sessionPlayerData: (sessionId: string, playerId: string) => `/api/sessions/${id(sessionId)}/players/${id(playerId)}/data`,
 } as const;

@@ -64,7 +64,7 @@ export class HistoryService {
 
   /** `GET /api/classes/:classId/roster/:entryId/history`: one student's sessions and catch-ups in this class, oldest first. */
   async student(user: UserEntity, classId: string, entryId: string): Promise<StudentHistoryDto> {
-    const { cls } = await this.classes.access(user, classId, 'read');
+    const { cls, access } = await this.classes.access(user, classId, 'read');
     const entry = await this.db.getRepository(RosterEntryEntity).findOne({ where: { id: entryId, classId } });
     if (!entry) throw new ApiException(HttpStatus.NOT_FOUND, 'not_found', 'No such student in this class.');
     // Only sessions this student played in; deleted data has lost its roster link and does not show.
@@ -94,6 +94,7 @@ export class HistoryService {
       sessions,
       catchups: await this.catchups.forStudent(classId, entryId),
       meanPercent: meanOfFigures(sessions.map((s) => s.percent)),
+      canDeleteData: access === 'owner',
     };
   }
 

@@ -1,16 +1,11 @@
 import { Body, Controller, Get, Patch } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
+import type { SchoolSettingsDto } from '@covalent/shared-types';
 import { Repository } from 'typeorm';
 import { CurrentUser, Roles } from '../common/decorators';
 import { UpdateSchoolSettingsDto } from './dto/update-school.dto';
 import { SchoolEntity } from './entities/school.entity';
 import { UserEntity } from './entities/user.entity';
-
-export interface SchoolSettingsDto {
-  id: string;
-  name: string;
-  retentionDays: number;
-}
 
 /** The admin's own school: retention of player data. */
 @Controller('admin/school')
