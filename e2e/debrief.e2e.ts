@@ -212,4 +212,18 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
   // An item page shows its distractor table.
   await items.getByRole('link').first().click();
   await expect(page.getByRole('table', { name: 'Distractor analysis' })).toBeVisible();
+
+  // On request the class's owner deletes one student's data: their history empties and the
+  // debrief counts them as removed, in no figure (DESIGN.md §9: deletion is real).
+  await page.goto(`/classes/${classId}`);
+  await page.getByRole('link', { name: `History for ${students[1]}` }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText(students[1]);
+  await page.getByRole('button', { name: "Delete this student's data" }).click();
+  await page.getByRole('alertdialog').getByRole('button', { name: 'Delete data' }).click();
+  await expect(page.getByRole('status').filter({ hasText: /3 responses/ })).toBeVisible(); // one answer per item, 3 items
+  await expect(page.getByText('No ended sessions for this student in this class yet.')).toBeVisible();
+  await expect(page.getByRole('table', { name: 'Sessions' })).toHaveCount(0);
+  await page.goto(`/debriefs/${sessionId}`);
+  await expect(page.getByText(/1 removed, in no figure/)).toBeVisible();
+  await expect(studentTable.getByRole('row').filter({ hasText: students[1] })).toHaveCount(0);
 });

@@ -5,6 +5,7 @@ import { EmptyState } from '@/features/shell/components/EmptyState';
 import { PageFallback } from '@/features/shell/components/PageFallback';
 import { PageHeader } from '@/features/shell/components/PageHeader';
 import { InviteTeacherForm } from '@/features/staff/components/InviteTeacherForm';
+import { PlayerDataCard } from '@/features/staff/components/PlayerDataCard';
 import { StaffTable } from '@/features/staff/components/StaffTable';
 import { useStaff } from '@/features/staff/hooks/useStaff';
 
@@ -36,6 +37,7 @@ export function AdminStaffPage() {
         ) : (
           <StaffTable staff={staff.data} currentUserId={me.id} />
         ))}
+      <PlayerDataCard />
     </Flex>
   );
 }

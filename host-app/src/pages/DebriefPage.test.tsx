@@ -13,6 +13,7 @@ import {
   makeDebrief,
   makeDebriefItem,
   makeDebriefStudent,
+  makeDeletePlayerData,
   makeMissedItem,
   noFig,
 } from '@/features/debrief/testing/debriefFactories';
@@ -20,11 +21,13 @@ import { formatDateTime } from '@/features/debrief/utils/formatDate';
 import { routes } from '@/routes';
 import { makeApiError, makeMe } from '@/test/factories';
 import { renderApp } from '@/test/renderApp';
-import { stubFetch } from '@/test/stubFetch';
+import { callsTo, stubFetch } from '@/test/stubFetch';
 
 const debriefUrl = `/api/sessions/${SESSION_ID}/debrief`;
 const catchupsUrl = `/api/sessions/${SESSION_ID}/catchups`;
 const closeUrl = `/api/sessions/${SESSION_ID}/catchups/${CATCHUP_ID}/close`;
+const KRYPTON_ID = '7c1e0a00-0000-4000-8000-0000000000p2';
+const kryptonDataUrl = `/api/sessions/${SESSION_ID}/players/${KRYPTON_ID}/data`;
 
 function renderDebrief(debrief: DebriefDto, extra: Parameters<typeof stubFetch>[0] = {}) {
   const fetchMock = stubFetch({
@@ -302,5 +305,69 @@ describe('DebriefPage catch-ups', () => {
     await user.click(screen.getByRole('button', { name: 'Create catch-up' }));
     expect(await catchupRow('NEW7QZ')).toHaveTextContent('7 of 20');
     expect(screen.queryByText('No catch-ups from this session yet.')).toBeNull();
+  });
+});
+
+describe("DebriefPage deleting one player's data", () => {
+  const amal = makeDebriefStudent({ rosterName: 'Amal Haddad' });
+  const krypton = makeDebriefStudent({ playerId: KRYPTON_ID, nickname: 'Krypton', rosterName: null });
+
+  it('asks first, then sends one DELETE for that player and shows the refetched debrief', async () => {
+    const user = userEvent.setup();
+    let deleted = false;
+    const { fetchMock } = renderDebrief(makeDebrief(), {
+      [`GET ${debriefUrl}`]: () => ({
+        status: 200,
+        body: makeDebrief({
+          removedCount: deleted ? 1 : 0,
+          students: [amal, deleted ? { ...krypton, nickname: 'Removed student', score: null, removed: true } : krypton],
+        }),
+      }),
+      [`DELETE ${kryptonDataUrl}`]: () => {
+        deleted = true;
+        return { status: 200, body: makeDeletePlayerData(2) };
+      },
+    });
+
+    const button = await screen.findByRole('button', { name: 'Delete data of Krypton' });
+    expect(button).toHaveTextContent('Delete data');
+    expect(button.closest('.debrief-no-print')).not.toBeNull();
+    await user.click(button);
+    const dialog = await screen.findByRole('alertdialog', { name: "Delete Krypton's data from this session?" });
+    expect(dialog).toHaveTextContent('The debrief counts them as removed. This cannot be undone.');
+    expect(callsTo(fetchMock, 'DELETE', kryptonDataUrl)).toHaveLength(0);
+
+    await user.click(within(dialog).getByRole('button', { name: 'Delete data' }));
+
+    const students = screen.getByRole('heading', { level: 2, name: 'Students' }).closest('section')!;
+    expect(await within(students).findByRole('status')).toHaveTextContent("Deleted Krypton's data from this session: 2 responses.");
+    const table = screen.getByRole('table', { name: 'Students' });
+    expect(await within(table).findByRole('row', { name: /Removed student/ })).toHaveTextContent('Data removed; in no figure.');
+    expect(screen.queryByRole('button', { name: 'Delete data of Krypton' })).toBeNull();
+    expect(screen.getByRole('button', { name: 'Delete data of Amal Haddad' })).toBeInTheDocument();
+    expect(callsTo(fetchMock, 'DELETE', kryptonDataUrl)).toHaveLength(1);
+    expect(fetchMock.mock.calls.filter(([, init]) => (init?.method ?? 'GET') === 'DELETE')).toHaveLength(1);
+    expect(callsTo(fetchMock, 'GET', debriefUrl)).toHaveLength(2);
+  });
+
+  it("shows the server's message when the deletion fails", async () => {
+    const user = userEvent.setup();
+    renderDebrief(makeDebrief({ students: [krypton] }), {
+      [`DELETE ${kryptonDataUrl}`]: { status: 409, body: makeApiError('session_not_ended', "A student's data can be deleted once the session has ended.") },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Delete data of Krypton' }));
+    await user.click(within(await screen.findByRole('alertdialog')).getByRole('button', { name: 'Delete data' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent("A student's data can be deleted once the session has ended.");
+    expect(screen.getByRole('button', { name: 'Delete data of Krypton' })).toBeInTheDocument();
+  });
+
+  it('offers no action for a student whose data is already removed, and keeps the action column out of print', async () => {
+    renderDebrief(makeDebrief({ students: [amal, { ...krypton, nickname: 'Removed student', score: null, removed: true }] }));
+    const table = await screen.findByRole('table', { name: 'Students' });
+    const removedRow = within(table).getByRole('row', { name: /Removed student/ });
+    expect(removedRow).toHaveTextContent('Data removed; in no figure.');
+    expect(within(removedRow).queryByRole('button')).toBeNull();
+    expect(within(table).getAllByRole('button', { name: /^Delete data of / })).toHaveLength(1);
+    expect(within(table).getByRole('columnheader', { name: 'Actions' })).toHaveClass('debrief-no-print');
   });
 });

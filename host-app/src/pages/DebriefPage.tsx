@@ -76,7 +76,7 @@ export function DebriefPage() {
             Each student carries their team's figures in this format.
           </Text>
         )}
-        <StudentsTable students={d.students} />
+        <StudentsTable sessionId={d.sessionId} students={d.students} />
       </section>
       {d.teams.length > 0 && (
         <section aria-labelledby="teams-heading">

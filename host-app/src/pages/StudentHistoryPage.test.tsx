@@ -7,6 +7,7 @@ import {
   ENTRY_ID,
   fig,
   makeCatchupCard,
+  makeDeletePlayerData,
   makeStudentCatchup,
   makeStudentHistory,
   makeStudentSession,
@@ -16,12 +17,14 @@ import { formatDateTime } from '@/features/debrief/utils/formatDate';
 import { routes } from '@/routes';
 import { makeApiError, makeMe } from '@/test/factories';
 import { renderApp } from '@/test/renderApp';
-import { stubFetch, type StubResponse } from '@/test/stubFetch';
+import { callsTo, stubFetch, type FetchRoutes, type StubResponse } from '@/test/stubFetch';
 
 const historyUrl = `/api/classes/${CLASS_ID}/roster/${ENTRY_ID}/history`;
 
-function openHistory(response: StubResponse) {
-  const fetchMock = stubFetch({ 'GET /api/me': { status: 200, body: makeMe() }, [`GET ${historyUrl}`]: response });
+const dataUrl = `/api/classes/${CLASS_ID}/roster/${ENTRY_ID}/data`;
+
+function openHistory(response: StubResponse | (() => StubResponse), extra: FetchRoutes = {}) {
+  const fetchMock = stubFetch({ 'GET /api/me': { status: 200, body: makeMe() }, [`GET ${historyUrl}`]: response, ...extra });
   renderApp(routes.studentHistory.build(CLASS_ID, ENTRY_ID));
   return fetchMock;
 }
@@ -132,5 +135,65 @@ describe('StudentHistoryPage', () => {
   it("shows the server's message for other failures", async () => {
     openHistory({ status: 500, body: makeApiError('internal', 'Something broke on our side.') });
     expect(await screen.findByRole('alert')).toHaveTextContent('Something broke on our side.');
+  });
+
+  describe("deleting a student's data", () => {
+    it('offers the class owner a button kept out of print, and sends nothing until confirmed', async () => {
+      const fetchMock = openHistory(history({ canDeleteData: true }));
+      const user = userEvent.setup();
+      const button = await screen.findByRole('button', { name: "Delete this student's data" });
+      expect(button.closest('.debrief-no-print')).not.toBeNull();
+      expect(screen.queryByText("Only the class's owner can delete a student's data.")).toBeNull();
+
+      await user.click(button);
+      const dialog = await screen.findByRole('alertdialog', { name: "Delete Amal H.'s data?" });
+      expect(dialog).toHaveTextContent('Their answers in every session of this class and their catch-up cards are deleted.');
+      expect(dialog).toHaveTextContent('Their name stays on the class list, and the debriefs count them as removed. This cannot be undone.');
+      expect(callsTo(fetchMock, 'DELETE', dataUrl)).toHaveLength(0);
+
+      await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
+      expect(screen.queryByRole('alertdialog')).toBeNull();
+      expect(callsTo(fetchMock, 'DELETE', dataUrl)).toHaveLength(0);
+    });
+
+    it('after confirming, sends one DELETE, says how many responses went and shows the refetched history', async () => {
+      let deleted = false;
+      const fetchMock = openHistory(() => history(deleted ? { sessions: [], catchups: [] } : {}), {
+        [`DELETE ${dataUrl}`]: () => {
+          deleted = true;
+          return { status: 200, body: makeDeletePlayerData(5) };
+        },
+      });
+      const user = userEvent.setup();
+      expect(await screen.findByRole('table', { name: 'Sessions' })).toBeInTheDocument();
+
+      await user.click(screen.getByRole('button', { name: "Delete this student's data" }));
+      await user.click(within(await screen.findByRole('alertdialog')).getByRole('button', { name: 'Delete data' }));
+
+      expect(await screen.findByRole('status')).toHaveTextContent("Deleted Amal H.'s data: 5 responses.");
+      expect(await screen.findByText('No ended sessions for this student in this class yet.')).toBeInTheDocument();
+      expect(screen.getByText('No catch-up cards for this student yet.')).toBeInTheDocument();
+      expect(callsTo(fetchMock, 'DELETE', dataUrl)).toHaveLength(1);
+      expect(callsTo(fetchMock, 'GET', historyUrl)).toHaveLength(2);
+    });
+
+    it("shows the server's message when the deletion fails, and keeps the history", async () => {
+      openHistory(history(), {
+        [`DELETE ${dataUrl}`]: { status: 403, body: makeApiError('forbidden', "Only the class's owner can do this.") },
+      });
+      const user = userEvent.setup();
+      await user.click(await screen.findByRole('button', { name: "Delete this student's data" }));
+      await user.click(within(await screen.findByRole('alertdialog')).getByRole('button', { name: 'Delete data' }));
+
+      expect(await screen.findByRole('alert')).toHaveTextContent("Only the class's owner can do this.");
+      expect(screen.queryByRole('status')).toBeNull();
+      expect(screen.getByRole('table', { name: 'Sessions' })).toBeInTheDocument();
+    });
+
+    it('shows co-teachers a note instead of the button', async () => {
+      openHistory(history({ canDeleteData: false }));
+      expect(await screen.findByText("Only the class's owner can delete a student's data.")).toBeInTheDocument();
+      expect(screen.queryByRole('button', { name: "Delete this student's data" })).toBeNull();
+    });
   });
 });

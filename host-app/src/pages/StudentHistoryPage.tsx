@@ -3,6 +3,7 @@ import { useParams } from 'react-router-dom';
 import { ApiRequestError } from '@/api/client';
 import '@/features/debrief/debrief.css';
 import { FormErrorCallout } from '@/features/forms/components/FormErrorCallout';
+import { DeleteStudentData } from '@/features/history/components/DeleteStudentData';
 import { HistoryBackLinks } from '@/features/history/components/HistoryBackLinks';
 import { HistorySessionsTable } from '@/features/history/components/HistorySessionsTable';
 import { HistorySummary } from '@/features/history/components/HistorySummary';
@@ -68,6 +69,7 @@ export function StudentHistoryPage() {
           </Flex>
         )}
       </section>
+      <DeleteStudentData history={h} />
     </Flex>
   );
 }

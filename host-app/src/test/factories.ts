@@ -1,4 +1,4 @@
-import type { ApiError, MeDto, StaffUserDto } from '@covalent/shared-types';
+import type { ApiError, MeDto, SchoolSettingsDto, StaffUserDto } from '@covalent/shared-types';
 
 /** Test data in one place; override only what a test is about. */
 export function makeMe(overrides: Partial<MeDto> = {}): MeDto {
@@ -23,6 +23,10 @@ export function makeStaffUser(overrides: Partial<StaffUserDto> = {}): StaffUserD
     createdAt: '2025-01-15T09:00:00.000Z',
     ...overrides,
   };
+}
+
+export function makeSchoolSettings(overrides: Partial<SchoolSettingsDto> = {}): SchoolSettingsDto {
+  return { id: '5a4f1e0c-0000-4000-8000-0000000000aa', name: 'Northfield High School', retentionDays: 365, ...overrides };
 }
 
 export function makeApiError(error: string, message: string, details?: ApiError['details']): ApiError {

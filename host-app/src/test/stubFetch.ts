@@ -37,3 +37,8 @@ export function sentBody(fetchMock: ReturnType<typeof stubFetch>, method: string
   const raw = call[1]?.body;
   return typeof raw === 'string' ? (JSON.parse(raw) as unknown) : undefined;
 }
+
+/** Every call a stubbed fetch received for one method and URL, to count them. */
+export function callsTo(fetchMock: ReturnType<typeof stubFetch>, method: string, url: string) {
+  return fetchMock.mock.calls.filter(([input, init]) => input === url && (init?.method ?? 'GET') === method);
+}

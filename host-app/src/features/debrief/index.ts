@@ -20,6 +20,8 @@ export { useDebrief, useDebriefItem } from './hooks/useDebrief';
 export { useDebriefs } from './hooks/useDebriefs';
 export { useCloseCatchup } from './hooks/useCloseCatchup';
 export { useCreateCatchup } from './hooks/useCreateCatchup';
+export { useDeleteSessionPlayerData } from './hooks/useDeleteSessionPlayerData';
+export { useInvalidatePlayerData } from './hooks/useInvalidatePlayerData';
 export { useEmailDebrief } from './hooks/useEmailDebrief';
 export { boxCountsText, lastResultText, ofTotal } from './utils/catchupLabels';
 export { debriefQueryKeys } from './utils/debriefQueryKeys';

@@ -1,9 +1,11 @@
 export { CatchupItemsTable } from './components/CatchupItemsTable';
+export { DeleteStudentData } from './components/DeleteStudentData';
 export { HistoryBackLinks } from './components/HistoryBackLinks';
 export { HistorySessionsTable } from './components/HistorySessionsTable';
 export { HistorySummary } from './components/HistorySummary';
 export { MissedItemsList } from './components/MissedItemsList';
 export { StudentCatchupCard } from './components/StudentCatchupCard';
+export { useDeleteStudentData } from './hooks/useDeleteStudentData';
 export { useStudentHistory } from './hooks/useStudentHistory';
 export { formatScore } from './utils/formatScore';
 export { historyQueryKeys } from './utils/historyQueryKeys';

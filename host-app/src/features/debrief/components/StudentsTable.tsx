@@ -1,11 +1,18 @@
 import type { DebriefStudentDto, MissedItemDto } from '@covalent/shared-types';
 import { Table, Text } from '@radix-ui/themes';
+import { ConfirmButton } from '@/features/forms/components/ConfirmButton';
+import { useDeleteSessionPlayerData } from '../hooks/useDeleteSessionPlayerData';
 import { formatPercentValue } from '../utils/formatPercentValue';
+import { DeletePlayerDataStatus } from './DeletePlayerDataStatus';
 import { FigureText } from './FigureText';
 
 export interface StudentsTableProps {
+  sessionId: string;
   students: DebriefStudentDto[];
 }
+
+const DELETE_DESCRIPTION =
+  'Their answers and nickname in this session are deleted, with any catch-up cards made from this session. The debrief counts them as removed. This cannot be undone.';
 
 const studentName = (s: DebriefStudentDto): string => s.rosterName ?? s.nickname;
 
@@ -29,53 +36,73 @@ function MissedList({ missed }: { missed: MissedItemDto[] }) {
   );
 }
 
-/** Each student's score and the items they missed, their answer beside the key. */
-export function StudentsTable({ students }: StudentsTableProps) {
+/** Each student's score and the items they missed, their answer beside the key; a teacher can delete one student's data here. */
+export function StudentsTable({ sessionId, students }: StudentsTableProps) {
   const sorted = [...students].sort((a, b) => studentName(a).localeCompare(studentName(b)));
+  const remove = useDeleteSessionPlayerData(sessionId);
   return (
-    <Table.Root variant="surface">
-      <caption className="visually-hidden">Students</caption>
-      <Table.Header>
-        <Table.Row>
-          <Table.ColumnHeaderCell>Student</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Score</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Percent</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Answered</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Missed items</Table.ColumnHeaderCell>
-        </Table.Row>
-      </Table.Header>
-      <Table.Body>
-        {sorted.map((s) =>
-          s.removed ? (
-            <Table.Row key={s.playerId}>
-              <Table.RowHeaderCell>{studentName(s)}</Table.RowHeaderCell>
-              <Table.Cell colSpan={4}>
-                <Text color="gray">Data removed; in no figure.</Text>
-              </Table.Cell>
-            </Table.Row>
-          ) : (
-            <Table.Row key={s.playerId}>
-              <Table.RowHeaderCell>
-                {studentName(s)}
-                {s.rosterName && s.rosterName !== s.nickname && (
-                  <Text color="gray" size="2">
-                    {' '}
-                    ({s.nickname})
-                  </Text>
-                )}
-              </Table.RowHeaderCell>
-              <Table.Cell>{s.score === null ? '—' : s.score.toFixed(2)}</Table.Cell>
-              <Table.Cell>
-                <FigureText figure={s.percent} format={formatPercentValue} />
-              </Table.Cell>
-              <Table.Cell>{s.answered}</Table.Cell>
-              <Table.Cell>
-                <MissedList missed={s.missed} />
-              </Table.Cell>
-            </Table.Row>
-          ),
-        )}
-      </Table.Body>
-    </Table.Root>
+    <>
+      <DeletePlayerDataStatus mutation={remove} />
+      <Table.Root variant="surface">
+        <caption className="visually-hidden">Students</caption>
+        <Table.Header>
+          <Table.Row>
+            <Table.ColumnHeaderCell>Student</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell>Score</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell>Percent</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell>Answered</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell>Missed items</Table.ColumnHeaderCell>
+            <Table.ColumnHeaderCell className="debrief-no-print">
+              <span className="visually-hidden">Actions</span>
+            </Table.ColumnHeaderCell>
+          </Table.Row>
+        </Table.Header>
+        <Table.Body>
+          {sorted.map((s) =>
+            s.removed ? (
+              <Table.Row key={s.playerId}>
+                <Table.RowHeaderCell>{studentName(s)}</Table.RowHeaderCell>
+                <Table.Cell colSpan={4}>
+                  <Text color="gray">Data removed; in no figure.</Text>
+                </Table.Cell>
+                {/* Nothing left to delete. */}
+                <Table.Cell className="debrief-no-print" />
+              </Table.Row>
+            ) : (
+              <Table.Row key={s.playerId}>
+                <Table.RowHeaderCell>
+                  {studentName(s)}
+                  {s.rosterName && s.rosterName !== s.nickname && (
+                    <Text color="gray" size="2">
+                      {' '}
+                      ({s.nickname})
+                    </Text>
+                  )}
+                </Table.RowHeaderCell>
+                <Table.Cell>{s.score === null ? '—' : s.score.toFixed(2)}</Table.Cell>
+                <Table.Cell>
+                  <FigureText figure={s.percent} format={formatPercentValue} />
+                </Table.Cell>
+                <Table.Cell>{s.answered}</Table.Cell>
+                <Table.Cell>
+                  <MissedList missed={s.missed} />
+                </Table.Cell>
+                <Table.Cell className="debrief-no-print">
+                  <ConfirmButton
+                    label="Delete data"
+                    ariaLabel={`Delete data of ${studentName(s)}`}
+                    title={`Delete ${studentName(s)}'s data from this session?`}
+                    description={DELETE_DESCRIPTION}
+                    confirmLabel="Delete data"
+                    disabled={remove.isPending}
+                    onConfirm={() => remove.mutate({ playerId: s.playerId, name: studentName(s) })}
+                  />
+                </Table.Cell>
+              </Table.Row>
+            ),
+          )}
+        </Table.Body>
+      </Table.Root>
+    </>
   );
 }

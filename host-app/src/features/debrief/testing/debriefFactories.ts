@@ -10,6 +10,7 @@ import type {
   DebriefStudentDto,
   DebriefSummaryDto,
   DebriefTeamDto,
+  DeletePlayerDataResponse,
   DistractorRowDto,
   FigureDto,
   MissedItemDto,
@@ -259,6 +260,11 @@ export function makeStudentHistory(overrides: Partial<StudentHistoryDto> = {}): 
     sessions: [makeStudentSession()],
     catchups: [makeStudentCatchup()],
     meanPercent: fig(200 / 3),
+    canDeleteData: true,
     ...overrides,
   };
+}
+
+export function makeDeletePlayerData(deletedResponses = 3): DeletePlayerDataResponse {
+  return { ok: true, deletedResponses };
 }

@@ -11,14 +11,16 @@ export interface ConfirmButtonProps {
   confirmLabel: string;
   onConfirm: () => void;
   disabled?: boolean;
+  /** A red, larger trigger for deleting a person's data, where a quiet one would undersell it. */
+  danger?: boolean;
 }
 
 /** A quiet button that asks before doing something that cannot be undone. */
-export function ConfirmButton({ label, ariaLabel, title, description, confirmLabel, onConfirm, disabled }: ConfirmButtonProps) {
+export function ConfirmButton({ label, ariaLabel, title, description, confirmLabel, onConfirm, disabled, danger = false }: ConfirmButtonProps) {
   return (
     <AlertDialog.Root>
       <AlertDialog.Trigger>
-        <Button size="1" variant="soft" color="gray" aria-label={ariaLabel} disabled={disabled}>
+        <Button size={danger ? '2' : '1'} variant="soft" color={danger ? 'red' : 'gray'} aria-label={ariaLabel} disabled={disabled}>
           {label}
         </Button>
       </AlertDialog.Trigger>

@@ -1,0 +1,1 @@
+export const schoolQueryKey = ['admin', 'school'] as const;
