@@ -15,12 +15,15 @@ import { ClassEntity } from '../classes/entities/class.entity';
 import { RosterService } from '../classes/roster.service';
 import { SchoolEntity } from '../users/entities/school.entity';
 import { UserEntity } from '../users/entities/user.entity';
+import { seedDemoSession } from './demo-session';
 
 interface DemoFixture {
   school: { name: string };
   users: { email: string; displayName: string; role: Role; password: string }[];
   classes: { name: string; period: string; term: string; roster: string; owner: string; coTeachers: string[]; keepApart: [string, string][] }[];
   banks: { title: string; file: string; owner: string; shareWith: [string, ShareAccess][] }[];
+  /** One session already played (invented answers), so the debrief and the class page have something to show. */
+  playedSession?: { class: { name: string; period: string }; bank: string; seed: string; absent: number };
 }
 
 const FIXTURES_DIR = join(__dirname, '../../../fixtures/demo');
@@ -76,6 +79,17 @@ async function main(): Promise<void> {
       if (await bankRepo.findOne({ where: { ownerId: owner.id, title: b.title } })) continue;
       const result = await bankCsv.importNewBank(owner, readFileSync(join(FIXTURES_DIR, b.file)), basename(b.file), b.title);
       for (const [email, access] of b.shareWith) await banks.share(owner, result.targetId, { email, access });
+    }
+
+    const played = demo.playedSession;
+    if (played) {
+      const cls = demo.classes.find((c) => c.name === played.class.name && c.period === played.class.period);
+      const owner = staff(cls?.owner ?? '');
+      const classRow = await classRepo.findOne({ where: { ownerId: owner.id, name: played.class.name, period: played.class.period } });
+      const bankRow = await bankRepo.findOne({ where: { ownerId: owner.id, title: played.bank } });
+      if (!classRow || !bankRow) throw new Error('the demo fixture names a played session for an unknown class or bank');
+      const id = await seedDemoSession(app, owner, classRow.id, bankRow.id, { seed: played.seed, absent: played.absent });
+      if (id) console.log(`  played session: ${played.bank}, ${played.class.name} period ${played.class.period} (invented answers)`);
     }
 
     console.log(`demo data: ${school.name} — ${demo.classes.length} classes, ${demo.banks.length} banks`);
