@@ -51,3 +51,25 @@ export const RETENTION_DAYS_MAX = 3650;
 export interface UpdateSchoolSettingsRequest {
   retentionDays: number;
 }
+
+/** `GET /api/auth/config`: what the sign-in page needs to know before it draws. */
+export interface AuthConfigDto {
+  /** Whether "Sign in with school account" is offered (OIDC_ISSUER is set). */
+  signOn: boolean;
+}
+
+/** Why a school sign-on ended on the sign-in page (`/sign-in?error=<code>`); the host app turns each into a sentence. */
+export const SIGN_ON_ERRORS = [
+  'sign_on_expired',
+  'state_mismatch',
+  'sign_on_cancelled',
+  'provider_error',
+  'provider_unreachable',
+  'sign_on_invalid',
+  'email_missing',
+  'email_unverified',
+  'no_account',
+  'account_deactivated',
+] as const;
+/** One of {@link SIGN_ON_ERRORS}. */
+export type SignOnError = (typeof SIGN_ON_ERRORS)[number];

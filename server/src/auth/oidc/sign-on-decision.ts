@@ -1,19 +1,8 @@
 // The pure parts of school sign-on: what the provider's answer means for Covalent. No I/O here.
 
-/** Why a sign-on ended on the sign-in page; the host app turns each into a sentence. */
-export const SIGN_ON_ERRORS = [
-  'sign_on_expired',
-  'state_mismatch',
-  'sign_on_cancelled',
-  'provider_error',
-  'provider_unreachable',
-  'sign_on_invalid',
-  'email_missing',
-  'email_unverified',
-  'no_account',
-  'account_deactivated',
-] as const;
-export type SignOnError = (typeof SIGN_ON_ERRORS)[number];
+import { SIGN_ON_ERRORS, type SignOnError } from '@covalent/shared-types';
+
+export { SIGN_ON_ERRORS, type SignOnError };
 
 export type Decision<T> = { ok: true; value: T } | { ok: false; error: SignOnError };
 

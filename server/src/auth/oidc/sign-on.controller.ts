@@ -1,5 +1,6 @@
 import { Controller, Get, HttpStatus, Inject, Query, Req, Res } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
+import type { AuthConfigDto } from '@covalent/shared-types';
 import type { Request, Response } from 'express';
 import { ApiException } from '../../common/api-error';
 import { Public } from '../../common/decorators';
@@ -8,12 +9,6 @@ import { setSessionCookie } from '../session-cookie';
 import { signInErrorLocation } from './sign-on-decision';
 import { SIGN_ON_FLOW_COOKIE, SIGN_ON_FLOW_COOKIE_PATH, SIGN_ON_FLOW_TTL_MS } from './sign-on-flow';
 import { SignOnService } from './sign-on.service';
-
-/** What the sign-in page needs to know before it draws. */
-export interface AuthConfigDto {
-  /** Whether "Sign in with school account" is offered. */
-  signOn: boolean;
-}
 
 /** School sign-on: full-page redirects to the provider and back; errors land on the sign-in page. */
 @Controller('auth')

@@ -1,6 +1,7 @@
-// The codes the server puts in `/sign-in?error=` after a school sign-on fails
-// (server/src/auth/oidc/sign-on-decision.ts, SIGN_ON_ERRORS).
-const MESSAGES: Record<string, string> = {
+import { SIGN_ON_ERRORS, type SignOnError } from '@covalent/shared-types';
+
+// One sentence for each code the server puts in `/sign-in?error=` after a school sign-on fails.
+const MESSAGES: Record<SignOnError, string> = {
   no_account: 'No Covalent account uses that school e-mail. Ask your school admin for an invitation.',
   account_deactivated: 'This Covalent account has been deactivated. Ask your school admin.',
   email_unverified:
@@ -18,8 +19,10 @@ const MESSAGES: Record<string, string> = {
 
 const FALLBACK = 'School sign-on did not complete. Try again, or sign in with your e-mail and password.';
 
+const isSignOnError = (code: string): code is SignOnError => (SIGN_ON_ERRORS as readonly string[]).includes(code);
+
 /** The sentence for a `?error=` code; undefined when there is no code. */
 export function signOnErrorMessage(code: string | null | undefined): string | undefined {
   if (!code) return undefined;
-  return Object.hasOwn(MESSAGES, code) ? MESSAGES[code] : FALLBACK;
+  return isSignOnError(code) ? MESSAGES[code] : FALLBACK;
 }
