@@ -340,7 +340,10 @@ describe("DebriefPage deleting one player's data", () => {
     await user.click(within(dialog).getByRole('button', { name: 'Delete data' }));
 
     const students = screen.getByRole('heading', { level: 2, name: 'Students' }).closest('section')!;
-    expect(await within(students).findByRole('status')).toHaveTextContent("Deleted Krypton's data from this session: 2 responses.");
+    const status = await within(students).findByRole('status');
+    expect(status).toHaveTextContent("Deleted Krypton's data from this session: 2 responses.");
+    // The button that was focused went with its row; focus moves to the status (WCAG 2.4.3 focus order).
+    await waitFor(() => expect(status).toHaveFocus());
     const table = screen.getByRole('table', { name: 'Students' });
     expect(await within(table).findByRole('row', { name: /Removed student/ })).toHaveTextContent('Data removed; in no figure.');
     expect(screen.queryByRole('button', { name: 'Delete data of Krypton' })).toBeNull();
