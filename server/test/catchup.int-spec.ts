@@ -197,6 +197,11 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     const results = (await agent.get(`/api/sessions/${sessionId}/catchups/${id}/results`).expect(200)).body;
     expect(results.closedAt).toBe(closed.closedAt);
     expect(results.students.find((s: { displayName: string }) => s.displayName === 'Ben Q.').items[0]).toMatchObject({ attempts: 1, correctAttempts: 1, box: 2 });
+    // On the class page a closed catch-up's box-1 cards are no longer open work; cleared ones still count.
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    const students = (await agent.get(`/api/classes/${cls}/trends`).expect(200)).body.students as { displayName: string; openCards: number; clearedCards: number }[];
+    expect(students.find((s) => s.displayName === 'Ana P.')).toMatchObject({ openCards: 0, clearedCards: 0 });
+    expect(students.find((s) => s.displayName === 'Ben Q.')).toMatchObject({ openCards: 0, clearedCards: 1 });
   });
 
   it('answers 404 to a teacher without the class on the list and on close, and closes nothing', async () => {
@@ -251,6 +256,20 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     expect((await agent.get(`/api/classes/${otherClass.id}/roster/${ben.id}/history`).expect(404)).body.error).toBe('not_found');
     const empty = (await agent.get(`/api/classes/${otherClass.id}/trends`).expect(200)).body;
     expect(empty).toMatchObject({ sessions: [], tags: [], catchups: [], students: [] });
+  });
+
+  it('deleting a removed earlier device of a student keeps the catch-up cards of the device that stayed', async () => {
+    const { agent, sessionId, tf, ben } = await endedClassSession();
+    // Ben's first phone was removed by the host; he picked his name again on another (same roster entry).
+    const [removed] = await ctx.db.query(
+      `INSERT INTO session_players (session_id, nickname, nickname_key, roster_entry_id, status, removed_at)
+       VALUES ($1, 'Ben Q.', 'ben q. (first phone)', $2, 'removed', now()) RETURNING id`,
+      [sessionId, ben.id],
+    );
+    const { id } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    await agent.delete(`/api/sessions/${sessionId}/players/${removed.id}/data`).expect(200);
+    const results = (await agent.get(`/api/sessions/${sessionId}/catchups/${id}/results`).expect(200)).body;
+    expect(results.students.find((s: { displayName: string }) => s.displayName === 'Ben Q.')?.items.map((i: { itemId: string }) => i.itemId)).toEqual([tf.id]);
   });
 
   it('lets a co-teacher read a student\u2019s history but not delete it', async () => {

@@ -1,4 +1,5 @@
 import type { App } from 'supertest/types';
+import { LiveSessionsService } from '../src/sessions/live/live-sessions.service';
 import { seedDemoSession } from '../src/database/demo-session';
 import { itemInputs, makeBankWithItems, makeSchool, makeUser, signedIn } from './helpers/factories';
 import { createTestApp, resetDatabase, type TestContext } from './helpers/test-app';
@@ -15,6 +16,7 @@ describe(`${seedDemoSession.name} (integration: live runtime + PostgreSQL)`, () 
     http = ctx.app.getHttpServer();
   });
   afterAll(() => ctx.close());
+  afterEach(() => jest.restoreAllMocks());
   beforeEach(() => resetDatabase(ctx.db));
 
   it('plays an ended session with every present student answering every item once, and does it only once', async () => {
@@ -39,5 +41,23 @@ describe(`${seedDemoSession.name} (integration: live runtime + PostgreSQL)`, () 
 
     expect(await seedDemoSession(ctx.app, teacher, cls.id, bankId, { seed: 'test-demo', absent: 2 })).toBeNull();
     expect((await ctx.db.query(`SELECT COUNT(*)::int AS n FROM sessions WHERE class_id = $1`, [cls.id]))[0].n).toBe(1);
+  });
+
+  it('leaves no half-played session behind when a step fails, so the next seed can try again', async () => {
+    const school = await makeSchool(ctx.db);
+    const teacher = await makeUser(ctx.db, school);
+    const agent = await signedIn(http, teacher);
+    const cls = (await agent.post('/api/classes').send({ name: 'Chemistry', period: '5' }).expect(201)).body;
+    for (const displayName of NAMES.slice(0, 3)) await agent.post(`/api/classes/${cls.id}/roster`).send({ displayName }).expect(201);
+    const { bankId } = await makeBankWithItems(agent, [itemInputs.single(), itemInputs.truefalse()]);
+    const live = ctx.app.get(LiveSessionsService);
+    jest.spyOn(live, 'submit').mockResolvedValueOnce({ ok: false, error: 'storage_unavailable', message: 'The answer could not be saved.' });
+
+    await expect(seedDemoSession(ctx.app, teacher, cls.id, bankId, { seed: 'fails', absent: 0 })).rejects.toThrow(/could not be saved/);
+    expect((await ctx.db.query('SELECT COUNT(*)::int AS n FROM sessions WHERE class_id = $1', [cls.id]))[0].n).toBe(0);
+
+    jest.restoreAllMocks();
+    const id = await seedDemoSession(ctx.app, teacher, cls.id, bankId, { seed: 'fails', absent: 0 });
+    expect((await agent.get(`/api/sessions/${id}/debrief`).expect(200)).body).toMatchObject({ playerCount: 3, itemCount: 2 });
   });
 });

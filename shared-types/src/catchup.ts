@@ -174,7 +174,7 @@ export interface ClassStudentTrendDto {
   sessionsPlayed: number;
   /** 0..100, the mean of the session percents that could be computed. */
   meanPercent: FigureDto;
-  /** Catch-up cards still in box 1 (never answered right since they were made or last missed). */
+  /** Cards still in box 1 of open catch-ups (not answered right since made or last missed; closed catch-ups left out). */
   openCards: number;
   clearedCards: number;
 }

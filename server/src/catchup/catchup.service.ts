@@ -233,10 +233,10 @@ export class CatchupService {
     }));
   }
 
-  /** Per roster entry of the class: catch-up cards still in box 1 and cleared (box 2 or higher). */
+  /** Per roster entry of the class: cards still in box 1 of open catch-ups (they can still play them), and cleared (box 2 or higher). */
   async cardCountsByStudent(classId: string): Promise<Map<string, { open: number; cleared: number }>> {
     const rows: { roster_entry_id: string; open: number; cleared: number }[] = await this.db.query(
-      `SELECT c.roster_entry_id, COUNT(*) FILTER (WHERE c.box = 1)::int AS open, COUNT(*) FILTER (WHERE c.box >= 2)::int AS cleared
+      `SELECT c.roster_entry_id, COUNT(*) FILTER (WHERE c.box = 1 AND k.closed_at IS NULL)::int AS open, COUNT(*) FILTER (WHERE c.box >= 2)::int AS cleared
        FROM catchup_cards c JOIN catchups k ON k.id = c.catchup_id
        WHERE k.class_id = $1 GROUP BY c.roster_entry_id`,
       [classId],

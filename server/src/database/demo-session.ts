@@ -75,39 +75,49 @@ export async function seedDemoSession(
     mixerMode: 'mix-tables',
     namePack: 'elements',
   });
-  const rng = seedrandom(model.seed);
-  const roster = await app.get(RosterService).list(teacher, classId);
-  const present = roster.filter((_, i) => i >= model.absent);
-  const join = app.get(JoinService);
-  const players: { id: string; ability: number }[] = [];
-  for (const entry of present) {
-    const joined = await join.join({ code: created.joinCode, rosterEntryId: entry.id }, 'demo-seed');
-    players.push({ id: joined.playerId, ability: 0.45 + 0.5 * rng() });
-  }
-
-  const live = app.get(LiveSessionsService);
-  const s = live.get(created.id);
-  if (!s) throw new Error('the demo session did not go live');
-  // As a phone's socket would: a round waits only for players who are there.
-  for (const p of players) await live.connectPlayer(s, p.id);
-  const command = async (type: 'start' | 'open_round' | 'close_round' | 'reveal' | 'next' | 'end') => {
-    const done = await live.hostCommand(s, { type });
-    // A round closes by itself once everyone has answered.
-    if (!done.ok && !(type === 'close_round' && done.error === 'round_not_open')) throw new Error(`demo ${type}: ${done.message}`);
-  };
-  await command('start');
-  for (const [r, item] of items.entries()) {
-    if (r > 0) await command('next');
-    await command('open_round');
-    const difficulty = 0.35 * rng();
-    for (const [i, p] of players.entries()) {
-      const right = rng() < Math.min(0.97, Math.max(0.1, p.ability - difficulty + 0.15));
-      const ack = await live.submit(s, p.id, { clientMessageId: `demo-${r}-${i}`, roundIndex: r, response: demoResponse(item, right, rng) });
-      if (!ack.ok) throw new Error(`demo answer: ${ack.message}`);
+  try {
+    const rng = seedrandom(model.seed);
+    const roster = await app.get(RosterService).list(teacher, classId);
+    const present = roster.filter((_, i) => i >= model.absent);
+    const join = app.get(JoinService);
+    const players: { id: string; ability: number }[] = [];
+    for (const entry of present) {
+      const joined = await join.join({ code: created.joinCode, rosterEntryId: entry.id }, 'demo-seed');
+      players.push({ id: joined.playerId, ability: 0.45 + 0.5 * rng() });
     }
-    await command('close_round');
-    await command('reveal');
+
+    const live = app.get(LiveSessionsService);
+    const s = live.get(created.id);
+    if (!s) throw new Error('the demo session did not go live');
+    // As a phone's socket would: a round waits only for players who are there.
+    for (const p of players) await live.connectPlayer(s, p.id);
+    const command = async (type: 'start' | 'open_round' | 'close_round' | 'reveal' | 'next' | 'end') => {
+      const done = await live.hostCommand(s, { type });
+      // A round closes by itself once everyone has answered.
+      if (!done.ok && !(type === 'close_round' && done.error === 'round_not_open')) throw new Error(`demo ${type}: ${done.message}`);
+    };
+    await command('start');
+    for (const [r, item] of items.entries()) {
+      if (r > 0) await command('next');
+      await command('open_round');
+      const difficulty = 0.35 * rng();
+      for (const [i, p] of players.entries()) {
+        const right = rng() < Math.min(0.97, Math.max(0.1, p.ability - difficulty + 0.15));
+        const ack = await live.submit(s, p.id, { clientMessageId: `demo-${r}-${i}`, roundIndex: r, response: demoResponse(item, right, rng) });
+        if (!ack.ok) throw new Error(`demo answer: ${ack.message}`);
+      }
+      await command('close_round');
+      await command('reveal');
+    }
+    await command('end');
+  } catch (err) {
+    // Never leave a half-played demo behind: it would come back live at every start and the next seed
+    // would play another. End it in memory (its timers stop), then delete it so a re-run starts afresh.
+    const live = app.get(LiveSessionsService);
+    const s = live.get(created.id);
+    if (s) await live.hostCommand(s, { type: 'end' }).catch(() => undefined);
+    await db.query('DELETE FROM sessions WHERE id = $1', [created.id]);
+    throw err;
   }
-  await command('end');
   return created.id;
 }

@@ -29,9 +29,12 @@ export class PlayerDataService {
   async erase(m: EntityManager, sessionId: string, playerIds: string[]): Promise<number> {
     if (playerIds.length === 0) return 0;
     // Their catch-up cards (and answers, by cascade) were made from this session's responses: they go too.
+    // Cards come only from a roster entry's player who was not removed; a removed earlier device of the
+    // same student (same roster entry) must not take the cards of the one that stayed.
     await m.query(
       `DELETE FROM catchup_cards WHERE catchup_id IN (SELECT id FROM catchups WHERE session_id = $1)
-         AND roster_entry_id IN (SELECT roster_entry_id FROM session_players WHERE session_id = $1 AND id = ANY($2) AND roster_entry_id IS NOT NULL)`,
+         AND roster_entry_id IN (SELECT roster_entry_id FROM session_players
+                                 WHERE session_id = $1 AND id = ANY($2) AND roster_entry_id IS NOT NULL AND removed_at IS NULL)`,
       [sessionId, playerIds],
     );
     const deleted: unknown[] = await m.query('DELETE FROM responses WHERE session_id = $1 AND player_id = ANY($2) RETURNING id', [sessionId, playerIds]);

@@ -47,9 +47,10 @@ export class SignOnController {
   async callback(@Req() req: Request, @Res() res: Response): Promise<void> {
     this.assertEnabled();
     const rawQuery = req.originalUrl.includes('?') ? req.originalUrl.slice(req.originalUrl.indexOf('?') + 1) : '';
-    const result = await this.signOn.finish(rawQuery, req.cookies?.[SIGN_ON_FLOW_COOKIE]);
+    // The flow cookie is spent whatever happens next.
     res.setHeader('Cache-Control', 'no-store');
     res.clearCookie(SIGN_ON_FLOW_COOKIE, { path: SIGN_ON_FLOW_COOKIE_PATH, httpOnly: true, sameSite: 'lax', secure: this.app.cookieSecure });
+    const result = await this.signOn.finish(rawQuery, req.cookies?.[SIGN_ON_FLOW_COOKIE]);
     if (!result.ok) return res.redirect(302, signInErrorLocation(this.app.publicUrl, result.error));
     setSessionCookie(res, result.sessionToken, this.app.cookieSecure);
     res.redirect(302, `${this.app.publicUrl}${result.next}`);

@@ -48,27 +48,32 @@ export class SignOnService {
     } catch (err) {
       return this.fail('start', err);
     }
-    const codeVerifier = oc.randomPKCECodeVerifier();
-    const state = oc.randomState();
-    const nonce = oc.randomNonce();
-    const url = oc.buildAuthorizationUrl(
-      config,
-      authorizationParams({
-        redirectUri: this.oidc.redirectUri,
-        scope: this.oidc.scope,
+    // Building the URL can fail too (a discovery document without an authorization endpoint).
+    try {
+      const codeVerifier = oc.randomPKCECodeVerifier();
+      const state = oc.randomState();
+      const nonce = oc.randomNonce();
+      const url = oc.buildAuthorizationUrl(
+        config,
+        authorizationParams({
+          redirectUri: this.oidc.redirectUri,
+          scope: this.oidc.scope,
+          state,
+          nonce,
+          codeChallenge: await oc.calculatePKCECodeChallenge(codeVerifier),
+        }),
+      );
+      const flowCookie = sealSignOnFlow(this.app.secret, {
         state,
         nonce,
-        codeChallenge: await oc.calculatePKCECodeChallenge(codeVerifier),
-      }),
-    );
-    const flowCookie = sealSignOnFlow(this.app.secret, {
-      state,
-      nonce,
-      codeVerifier,
-      next: safeNextPath(next),
-      exp: this.clock.now() + SIGN_ON_FLOW_TTL_MS,
-    });
-    return { ok: true, redirectTo: url.href, flowCookie };
+        codeVerifier,
+        next: safeNextPath(next),
+        exp: this.clock.now() + SIGN_ON_FLOW_TTL_MS,
+      });
+      return { ok: true, redirectTo: url.href, flowCookie };
+    } catch (err) {
+      return this.fail('start', err);
+    }
   }
 
   /**
@@ -113,9 +118,14 @@ export class SignOnService {
 
     const email = emailFromClaims(claims);
     if (!email.ok) return this.refuse(email.error);
-    const user = decideSignOnUser(await this.auth.findUserByEmail(email.value));
-    if (!user.ok) return this.refuse(user.error);
-    return { ok: true, sessionToken: await this.auth.createSession(user.value.id), next: flow.next };
+    try {
+      const user = decideSignOnUser(await this.auth.findUserByEmail(email.value));
+      if (!user.ok) return this.refuse(user.error);
+      return { ok: true, sessionToken: await this.auth.createSession(user.value.id), next: flow.next };
+    } catch (err) {
+      // The database, not the provider: still a redirect to the sign-in page, never a 500.
+      return this.fail('session', err);
+    }
   }
 
   /** Discovery once, kept; a failure is not kept, so the next attempt asks again. */

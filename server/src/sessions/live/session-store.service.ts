@@ -105,8 +105,9 @@ export class SessionStore {
    * closed), inside the caller's transaction. Returns the rounds whose results it stored.
    */
   async saveState(s: LiveSession, m: EntityManager): Promise<number[]> {
-    // Everything is read from the live state before the first await: no copy of the state is needed,
-    // and nothing can change it meanwhile (callers hold the session's queue, and this does not wait first).
+    // Everything is read from the live state before this function's first await, so no copy is needed.
+    // Nothing changes the state meanwhile because every caller runs inside the session's queue
+    // (persist waits for its transaction to begin before calling this, which the queue makes safe).
     const state = s.engine.peekState();
     const snapshotJson = JSON.stringify(encodeSnapshot(state));
     const status = state.status;
