@@ -67,5 +67,18 @@ export async function resetDatabase(db: DataSource): Promise<void> {
   const tables: { tablename: string }[] = await db.query(
     `SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations'`,
   );
-  if (tables.length) await db.query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} CASCADE`);
+  if (!tables.length) return;
+  const truncate = `TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} CASCADE`;
+  // Sockets closed by the previous test still write (a player marked away) while TRUNCATE takes its
+  // locks; PostgreSQL then aborts one side with a deadlock (40P01). The write is harmless: try again.
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await db.query(truncate);
+      return;
+    } catch (err) {
+      const code = (err as { driverError?: { code?: string } }).driverError?.code;
+      if (code !== '40P01' || attempt >= 5) throw err;
+      await new Promise((r) => setTimeout(r, 50 * attempt));
+    }
+  }
 }
