@@ -19,6 +19,7 @@ import { RosterEntryEntity } from '../classes/entities/roster-entry.entity';
 import { ApiException } from '../common/api-error';
 import { appConfig } from '../config/app.config';
 import { DebriefService } from '../debrief/debrief.service';
+import { computed, notComputed } from '../debrief/domain';
 import { checkAnswer } from '../scoring/domain/answer-check';
 import { SessionEntity, type SessionItem } from '../sessions/entities/session.entity';
 import { newJoinCode, normaliseJoinCode } from '../sessions/join-code';
@@ -95,7 +96,7 @@ function cardResult(r: CardRow, items: readonly SessionItem[]): CatchupCardResul
   };
 }
 
-const share = (part: number, whole: number, reason: string): FigureDto => (whole > 0 ? { value: part / whole, reason: null } : { value: null, reason });
+const share = (part: number, whole: number, reason: string): FigureDto => (whole > 0 ? computed(part / whole) : notComputed(reason));
 
 const iso = (ms: number | null): string | null => (ms === null ? null : new Date(ms).toISOString());
 

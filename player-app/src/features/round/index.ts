@@ -23,3 +23,4 @@ export {
   pickedOptionIds,
   sameResponse,
 } from './utils/describeResponse';
+export { emptyDraft, isCompleteDraft } from './utils/answerDraft';

@@ -12,7 +12,8 @@ export type {
   DebriefTeamRound,
 } from './debrief-input';
 export type { ExamineeResult, MissedItem } from './examinee-results';
-export { NOT_ENOUGH_DATA_LABEL, NotComputedReason } from './figure';
+export { computed, NOT_ENOUGH_DATA_LABEL, NotComputedReason, notComputed } from './figure';
+export { mean } from './statistics';
 export type { Figure } from './figure';
 export { ItemFlag, ItemThresholds, itemFlags } from './item-analysis';
 export type { DistractorTable, GroupShares, ItemAnalysis, OptionShares } from './item-analysis';

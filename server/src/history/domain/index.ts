@@ -1,1 +1,1 @@
-export { meanOfFigures, NO_PERCENT_REASON, type HistoryFigure } from './mean-figure';
+export { meanOfFigures, NO_PERCENT_REASON } from './mean-figure';

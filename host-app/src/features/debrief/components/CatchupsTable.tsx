@@ -1,11 +1,8 @@
 import type { CatchupSummaryDto } from '@covalent/shared-types';
 import { Button, Flex, Table } from '@radix-ui/themes';
 import { ConfirmButton } from '@/features/forms/components/ConfirmButton';
-import { boxCountsText, ofTotal } from '../utils/catchupLabels';
-import { formatDateTime } from '../utils/formatDate';
-import { formatShare } from '../utils/formatFigure';
-import { CatchupStatusBadge } from './CatchupStatusBadge';
-import { FigureText } from './FigureText';
+import { boxCountsText } from '../utils/catchupLabels';
+import { CatchupSummaryCells, CatchupSummaryHeaders } from './CatchupSummaryCells';
 
 export interface CatchupsTableProps {
   catchups: CatchupSummaryDto[];
@@ -25,11 +22,7 @@ export function CatchupsTable({ catchups, expanded, resultsIdFor, onToggleResult
       <Table.Header>
         <Table.Row>
           <Table.ColumnHeaderCell>Code</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Created</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Status</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Students started</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Cards cleared</Table.ColumnHeaderCell>
-          <Table.ColumnHeaderCell>Accuracy</Table.ColumnHeaderCell>
+          <CatchupSummaryHeaders />
           <Table.ColumnHeaderCell>Cards per box</Table.ColumnHeaderCell>
           <Table.ColumnHeaderCell>
             <span className="visually-hidden">Actions</span>
@@ -42,15 +35,7 @@ export function CatchupsTable({ catchups, expanded, resultsIdFor, onToggleResult
           return (
             <Table.Row key={c.id}>
               <Table.RowHeaderCell>{c.code}</Table.RowHeaderCell>
-              <Table.Cell>{formatDateTime(c.createdAt)}</Table.Cell>
-              <Table.Cell>
-                <CatchupStatusBadge closedAt={c.closedAt} />
-              </Table.Cell>
-              <Table.Cell>{ofTotal(c.startedCount, c.studentCount)}</Table.Cell>
-              <Table.Cell>{ofTotal(c.clearedCount, c.cardCount)}</Table.Cell>
-              <Table.Cell>
-                <FigureText figure={c.accuracy} format={formatShare} />
-              </Table.Cell>
+              <CatchupSummaryCells catchup={c} />
               <Table.Cell>{boxCountsText(c.boxCounts)}</Table.Cell>
               <Table.Cell>
                 <Flex gap="2" justify="end">

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { CatchupItemView, ItemResponse } from '@covalent/shared-types';
-import { ChoiceAnswer, OrderAnswer, TypedAnswer } from '@/features/round';
+import { ChoiceAnswer, emptyDraft, isCompleteDraft, OrderAnswer, TypedAnswer } from '@/features/round';
 
 export interface CatchupQuestionProps {
   item: CatchupItemView;
@@ -11,23 +11,9 @@ export interface CatchupQuestionProps {
   onAnswer: (response: ItemResponse) => void;
 }
 
-function startingDraft(item: CatchupItemView): ItemResponse | null {
-  if (item.type === 'order') return { type: 'order', sequence: item.options.map((o) => o.id) };
-  if (item.type === 'multi') return { type: 'multi', optionIds: [] };
-  if (item.type === 'numeric' || item.type === 'text') return { type: item.type, text: '' };
-  return null;
-}
-
-function isComplete(draft: ItemResponse | null): draft is ItemResponse {
-  if (!draft) return false;
-  if (draft.type === 'multi') return draft.optionIds.length > 0;
-  if (draft.type === 'numeric' || draft.type === 'text') return draft.text.trim() !== '';
-  return true;
-}
-
 /** One due item with the round's answer controls; nothing is sent until "Check answer". */
 export function CatchupQuestion({ item, position, count, pending, error, onAnswer }: CatchupQuestionProps) {
-  const [draft, setDraft] = useState<ItemResponse | null>(() => startingDraft(item));
+  const [draft, setDraft] = useState<ItemResponse | null>(() => emptyDraft(item));
   const heading = useRef<HTMLHeadingElement>(null);
 
   useEffect(() => {
@@ -35,7 +21,7 @@ export function CatchupQuestion({ item, position, count, pending, error, onAnswe
   }, [item.itemId]);
 
   function submit() {
-    if (isComplete(draft) && !pending) onAnswer(draft);
+    if (isCompleteDraft(draft) && !pending) onAnswer(draft);
   }
 
   let controls;
@@ -80,7 +66,7 @@ export function CatchupQuestion({ item, position, count, pending, error, onAnswe
         </p>
       )}
       <div className="answer-actions">
-        <button type="button" className="button-primary" disabled={pending || !isComplete(draft)} onClick={submit}>
+        <button type="button" className="button-primary" disabled={pending || !isCompleteDraft(draft)} onClick={submit}>
           {pending ? 'Checking…' : 'Check answer'}
         </button>
       </div>

@@ -2,6 +2,7 @@ import { useEffect, useRef, useState, type ReactNode } from 'react';
 import type { ItemResponse } from '@covalent/shared-types';
 import { ownVote, useGameStore, type RoundView } from '@/stores/useGameStore';
 import { useAnswerSender } from '../hooks/useAnswerSender';
+import { emptyDraft, isCompleteDraft } from '../utils/answerDraft';
 import { describeResponse, sameResponse } from '../utils/describeResponse';
 import { ChoiceAnswer } from './ChoiceAnswer';
 import { Countdown } from './Countdown';
@@ -14,20 +15,7 @@ export interface AnswerScreenProps {
 }
 
 function startingDraft(round: RoundView, shared: ItemResponse | undefined): ItemResponse | null {
-  const known = shared ?? round.yourAnswer?.response;
-  if (known) return known;
-  const { item } = round;
-  if (item.type === 'order') return { type: 'order', sequence: item.options.map((o) => o.id) };
-  if (item.type === 'multi') return { type: 'multi', optionIds: [] };
-  if (item.type === 'numeric' || item.type === 'text') return { type: item.type, text: '' };
-  return null;
-}
-
-function isComplete(draft: ItemResponse | null): draft is ItemResponse {
-  if (!draft) return false;
-  if (draft.type === 'multi') return draft.optionIds.length > 0;
-  if (draft.type === 'numeric' || draft.type === 'text') return draft.text.trim() !== '';
-  return true;
+  return shared ?? round.yourAnswer?.response ?? emptyDraft(round.item);
 }
 
 /** The open round: the prompt, the countdown and, for whoever may answer, the controls. */
@@ -64,12 +52,12 @@ export function AnswerScreen({ round }: AnswerScreenProps) {
   }
 
   function submit() {
-    if (!isComplete(draft) || disabled) return;
+    if (!isCompleteDraft(draft) || disabled) return;
     void sender.send(draft, huddle ? false : undefined);
   }
 
   function lockIn() {
-    if (!isComplete(draft)) return;
+    if (!isCompleteDraft(draft)) return;
     // The shared vote is what the team sees: lock it as is, or share and lock the new one.
     void (sameResponse(draft, shared) ? sender.lock() : sender.send(draft, true));
   }
@@ -144,7 +132,7 @@ export function AnswerScreen({ round }: AnswerScreenProps) {
               <button
                 type="button"
                 className={huddle ? 'button-secondary' : 'button-primary'}
-                disabled={!isComplete(draft) || sender.pending}
+                disabled={!isCompleteDraft(draft) || sender.pending}
                 onClick={submit}
               >
                 {huddle ? 'Share my vote' : 'Submit answer'}
@@ -154,7 +142,7 @@ export function AnswerScreen({ round }: AnswerScreenProps) {
               <button
                 type="button"
                 className="button-primary"
-                disabled={!isComplete(draft) || sender.pending}
+                disabled={!isCompleteDraft(draft) || sender.pending}
                 onClick={lockIn}
               >
                 Lock in
@@ -176,7 +164,7 @@ export function AnswerScreen({ round }: AnswerScreenProps) {
         ) : locked ? (
           <p className="answer-sent">
             {huddle ? 'Locked in' : 'Answer sent'}
-            {draft && isComplete(draft) ? `: ${describeResponse(item, draft)}` : ''}. Wait for the reveal.
+            {draft && isCompleteDraft(draft) ? `: ${describeResponse(item, draft)}` : ''}. Wait for the reveal.
           </p>
         ) : sender.pending ? (
           <p>Sending…</p>
