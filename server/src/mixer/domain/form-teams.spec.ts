@@ -127,6 +127,8 @@ describe('formTeams', () => {
             expect(result.cost.keepApartViolations).toBe(0);
           },
         ),
+        // A case where every restart's swap search stalled with one pair together (a CI run found it).
+        { examples: [[5, 2, [[4, 18], [6, 17], [4, 12], [0, 27]], 'balanced', 'AK']] },
       );
     });
 

@@ -1,6 +1,7 @@
 import { buildModel, evaluate, MIXER_WEIGHTS, resolveTeamCount, type MixerModel } from './mixer-model';
 import type { CostBreakdown, MixerBudget, MixerInput, MixerResult } from './mixer.types';
 import { createRng, shuffle, type Rng } from './rng';
+import { separateKeepApart } from './separate-keep-apart';
 
 /**
  * 300 players into 75 teams (balanced, the slowest mode): a restart converges in
@@ -19,7 +20,9 @@ const EPS = 1e-9;
  * content of the input only, never on its order. Each restart deals a seeded
  * shuffle round-robin into teams, then swaps players of different teams while a
  * swap lowers the cost (first improvement, scanning in the shuffled order).
- * The lowest cost wins; an earlier restart wins ties. In `random` mode only
+ * The lowest cost wins; an earlier restart wins ties. When a keep-apart pair is
+ * still together, an exact search for a separation (separateKeepApart) gives one
+ * more start. In `random` mode only
  * keep-apart and keep-together count, so with neither the first deal stands and
  * every arrangement is equally likely.
  */
@@ -37,7 +40,16 @@ export function formTeams(input: MixerInput): MixerResult {
     if (best === null || cost.total < best.cost.total - EPS) best = { teams, cost };
     if (best.cost.total <= EPS) break; // nothing can beat zero
   }
-  const winner = best as { teams: number[][]; cost: CostBreakdown };
+  let winner = best as { teams: number[][]; cost: CostBreakdown };
+  if (winner.cost.keepApartViolations > 0) {
+    // Swaps can stall with a pair together when a separation exists (DESIGN.md §4: never then).
+    const separated = separateKeepApart(model, k, rng);
+    if (separated) {
+      const teams = improve(model, stateOf(separated, k, rng), budget.swapPasses);
+      const cost = evaluate(model, teams);
+      if (cost.total < winner.cost.total - EPS) winner = { teams, cost };
+    }
+  }
   return { teams: toIds(model, winner.teams), cost: winner.cost, seed: input.seed };
 }
 
@@ -79,6 +91,17 @@ function deal(n: number, k: number, rng: Rng): SearchState {
     teamOf[player] = position % k;
   });
   return { order, members, teamOf };
+}
+
+/** A search state from each player's team, scanned in a seeded order. */
+function stateOf(teamOf: Int32Array, k: number, rng: Rng): SearchState {
+  const order = shuffle(
+    Array.from({ length: teamOf.length }, (_, i) => i),
+    rng,
+  );
+  const members: number[][] = Array.from({ length: k }, () => []);
+  for (const player of order) members[teamOf[player]].push(player);
+  return { order, members, teamOf: Int32Array.from(teamOf) };
 }
 
 interface SearchState {

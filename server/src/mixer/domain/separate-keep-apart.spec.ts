@@ -1,0 +1,111 @@
+import fc from 'fast-check';
+import { buildModel } from './mixer-model';
+import { makeInput, makePlayers, playerId } from './mixer.test-factories';
+import { createRng } from './rng';
+import { separateKeepApart } from './separate-keep-apart';
+
+/** Keep-apart pairs by player index, read back from the model's matrix. */
+const pairsOf = (n: number, apart: Uint8Array): [number, number][] => {
+  const pairs: [number, number][] = [];
+  for (let a = 0; a < n; a++) for (let b = a + 1; b < n; b++) if (apart[a * n + b]) pairs.push([a, b]);
+  return pairs;
+};
+
+const modelOf = (n: number, pairs: [number, number][]) =>
+  buildModel(
+    makeInput({ players: makePlayers(n), keepApart: pairs.map(([a, b]): [string, string] => [playerId(a), playerId(b)]) }),
+  );
+
+/** Sizes within one and no pair together, checked from scratch. */
+function isSeparation(n: number, k: number, pairs: [number, number][], teamOf: Int32Array): boolean {
+  const sizes = new Array<number>(k).fill(0);
+  for (let i = 0; i < n; i++) {
+    if (teamOf[i] < 0 || teamOf[i] >= k) return false;
+    sizes[teamOf[i]]++;
+  }
+  return Math.max(...sizes) - Math.min(...sizes) <= 1 && pairs.every(([a, b]) => teamOf[a] !== teamOf[b]);
+}
+
+/**
+ * Exhaustive oracle: tries every assignment of n players to k labelled teams
+ * (kⁿ of them, so only for small n), independent of the backtracking under test.
+ */
+function someSeparationExists(n: number, k: number, pairs: [number, number][]): boolean {
+  const teamOf = new Int32Array(n);
+  const total = k ** n;
+  for (let code = 0; code < total; code++) {
+    let c = code;
+    for (let i = 0; i < n; i++) {
+      teamOf[i] = c % k;
+      c = Math.floor(c / k);
+    }
+    if (isSeparation(n, k, pairs, teamOf)) return true;
+  }
+  return false;
+}
+
+describe('separateKeepApart', () => {
+  it('separates the pairs a swap search can stall on (found by the formTeams property)', () => {
+    // 5 players into teams of 3 and 2; p02 must be apart from p00, p01 and p04, p04 from p03:
+    // the only separation is {p02, p03} / {p00, p01, p04}.
+    const pairs: [number, number][] = [[4, 3], [1, 2], [4, 2], [0, 2]];
+    const teamOf = separateKeepApart(modelOf(5, pairs), 2, createRng('AK'));
+    expect(teamOf).not.toBeNull();
+    const t = teamOf as Int32Array;
+    expect(t[2]).toBe(t[3]);
+    expect(new Set([t[0], t[1], t[4]]).size).toBe(1);
+    expect(t[0]).not.toBe(t[2]);
+  });
+
+  it('returns null when k + 1 players are all to be kept apart (pigeonhole principle)', () => {
+    const pairs: [number, number][] = [];
+    for (let a = 0; a < 5; a++) for (let b = a + 1; b < 5; b++) pairs.push([a, b]);
+    expect(separateKeepApart(modelOf(12, pairs), 4, createRng('clique'))).toBeNull();
+  });
+
+  it('returns null when the sizes rule forbids the only colouring', () => {
+    // One player apart from the five others fits 2 teams only alone, but 6 players
+    // into 2 teams must be 3 and 3.
+    const star: [number, number][] = [1, 2, 3, 4, 5].map((b) => [0, b]);
+    expect(separateKeepApart(modelOf(6, star), 2, createRng('star'))).toBeNull();
+    // Into 5 teams (sizes 2, 1, 1, 1, 1) player 0 can be alone.
+    const teamOf = separateKeepApart(modelOf(6, star), 5, createRng('star'));
+    expect(teamOf && isSeparation(6, 5, star, teamOf)).toBe(true);
+  });
+
+  it('gives up, returning null, when the node budget runs out', () => {
+    const pairs: [number, number][] = [];
+    for (let a = 0; a < 9; a++) for (let b = a + 1; b < 9; b++) pairs.push([a, b]);
+    // K9 into 8 teams is impossible; a budget of 1 stops at the first step.
+    expect(separateKeepApart(modelOf(30, pairs), 8, createRng('budget'), 1)).toBeNull();
+  });
+
+  it('finds a separation exactly when one exists (exhaustive check, up to 8 players)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 8 }),
+        fc.integer({ min: 1, max: 4 }),
+        fc.array(fc.tuple(fc.nat(7), fc.nat(7)), { maxLength: 14 }),
+        fc.string(),
+        (n, kRaw, rawPairs, seed) => {
+          const k = Math.min(kRaw, n);
+          const model = modelOf(n, rawPairs.map(([a, b]) => [a % n, b % n]));
+          const pairs = pairsOf(n, model.apart);
+          const teamOf = separateKeepApart(model, k, createRng(seed));
+          if (teamOf === null) expect(someSeparationExists(n, k, pairs)).toBe(false);
+          else expect(isSeparation(n, k, pairs, teamOf)).toBe(true);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it('is deterministic for a seed and varies with it', () => {
+    const pairs: [number, number][] = [[0, 1], [2, 3], [4, 5]];
+    const model = modelOf(12, pairs);
+    const first = separateKeepApart(model, 3, createRng('same'));
+    expect(separateKeepApart(model, 3, createRng('same'))).toEqual(first);
+    const others = ['a', 'b', 'c', 'd', 'e', 'f'].map((s) => Array.from(separateKeepApart(model, 3, createRng(s)) ?? []).join());
+    expect(new Set(others).size).toBeGreaterThan(1);
+  });
+});
