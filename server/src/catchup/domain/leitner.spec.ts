@@ -27,15 +27,24 @@ describe('review', () => {
     expect(due).toEqual([2, 6, 14, 30, 46]);
   });
 
-  it('always lands in 1..5 and never schedules in the past (property)', () => {
+  it('always lands in 1..5 and schedules the box’s interval after the review, early or late (property)', () => {
+    // Each review happens some time after the previous one (up to 40 days: before its due
+    // date as often as after it); the box follows the Leitner rule from a plain counter.
+    const step = fc.record({ correct: fc.boolean(), waitMs: fc.integer({ min: 0, max: 40 * DAY_MS }) });
     fc.assert(
-      fc.property(fc.array(fc.boolean(), { maxLength: 40 }), (answers) => {
+      fc.property(fc.array(step, { maxLength: 40 }), (steps) => {
         let card = newCard(T0);
-        for (const correct of answers) {
-          const next = review(card, correct, card.dueAt);
-          expect(next.box).toBeGreaterThanOrEqual(1);
+        let now = T0;
+        let expectedBox = 1;
+        for (const { correct, waitMs } of steps) {
+          now += waitMs;
+          expectedBox = correct ? Math.min(expectedBox + 1, 5) : 1;
+          const next = review(card, correct, now);
+          expect(next.box).toBe(expectedBox);
           expect(next.box).toBeLessThanOrEqual(BOX_COUNT);
-          expect(next.dueAt).toBeGreaterThan(card.dueAt);
+          expect(next.reviewedAt).toBe(now);
+          expect(next.dueAt).toBe(now + 2 ** (expectedBox - 1) * DAY_MS);
+          expect(isDue(next, now)).toBe(false);
           card = next;
         }
       }),

@@ -76,15 +76,19 @@ describe('roundPoints', () => {
         fc.integer({ min: 0, max: 60_000 }),
         (credit, speedWeight, limitMs, elapsedMs) => {
           const t = Math.min(elapsedMs, limitMs);
+          // 1000 · c · (T − w·t) / T, dividing last: an early t/T (e.g. 52150/60000) would be cut
+          // to 20 digits and turn an exact half such as 78.5 into 78.4999… (a stress run found it).
           const expected = new Decimal(1000)
             .times(credit)
-            .times(new Decimal(1).minus(new Decimal(speedWeight).times(t).div(limitMs)))
+            .times(new Decimal(limitMs).minus(new Decimal(speedWeight).times(t)))
+            .div(limitMs)
             .toDecimalPlaces(0, Decimal.ROUND_HALF_UP)
             .toNumber();
           expect(roundPoints({ credit, elapsedMs, limitMs, speedWeight })).toBe(expected);
         },
       ),
-      { numRuns: 2000, seed: 20240901 },
+      // 600 · (1 − 52150/60000) = 78.5 exactly, which rounds half up to 79.
+      { numRuns: 2000, seed: 20240901, examples: [[0.6, 1, 60_000, 52_150]] },
     );
   });
 

@@ -31,11 +31,25 @@ describe('editDistance', () => {
 describe('isOneTypoAway', () => {
   // DESIGN.md §5: within edit distance 1 for answers of 5+ letters; checked against leven.
   it('matches leven distance 1 for accepted answers of 5+ letters with the same digits', () => {
-    const word = fc.string({ unit: fc.constantFrom('a', 'b', 'c', 'd', 'e'), minLength: 5, maxLength: 9 });
-    const edit = fc.string({ unit: fc.constantFrom('a', 'b', 'c', 'd', 'e'), minLength: 4, maxLength: 10 });
-    fc.assert(fc.property(word, edit, (accepted, typed) => isOneTypoAway(accepted, typed) === (leven(accepted, typed) === 1)), {
-      numRuns: 1000,
-    });
+    // Letters and digits, so both of the rule's conditions (5+ letters, digits unchanged) are met and missed.
+    const unit = fc.constantFrom('a', 'b', 'c', 'd', 'e', '2', '3');
+    const word = fc.string({ unit, minLength: 3, maxLength: 9 });
+    const edit = fc.string({ unit, minLength: 2, maxLength: 10 });
+    const letters = (s: string) => s.replace(/[^a-e]/g, '').length;
+    const digits = (s: string) => s.replace(/[^23]/g, '');
+    fc.assert(
+      fc.property(
+        word,
+        edit,
+        (accepted, typed) =>
+          isOneTypoAway(accepted, typed) ===
+          (letters(accepted) >= 5 && digits(accepted) === digits(typed) && leven(accepted, typed) === 1),
+      ),
+      { numRuns: 2000 },
+    );
+    // NaHCO3 → NaHCO2 is one edit but another compound (the digits rule).
+    expect(isOneTypoAway('nahco3', 'nahco2')).toBe(false);
+    expect(isOneTypoAway('nahco3', 'nahcoo3')).toBe(true);
   });
 });
 
