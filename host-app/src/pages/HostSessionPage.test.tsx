@@ -115,6 +115,20 @@ describe('HostSessionPage', () => {
     expect(screen.getByRole('timer', { name: 'Time left' })).toHaveTextContent(/^(19|20)seconds left$/);
   });
 
+  it('before a round opens, shows each team’s size instead of "0 of 0 answered"', async () => {
+    await renderHost(
+      makeRunningView({
+        timing: makeTiming({ status: 'ready', deadlineAt: null }),
+        progress: [{ teamId: 'team-ar', answered: 0, members: 0 }, { teamId: 'team-b', answered: 0, members: 0 }],
+      }),
+    );
+    const rows = within(await screen.findByRole('list', { name: 'Teams' })).getAllByRole('listitem');
+    // The factory's Argon has four members (one away, still a player); Boron three.
+    expect(rows[0]).toHaveTextContent(/Argon\s*4 players$/);
+    expect(rows[1]).toHaveTextContent(/Boron\s*3 players$/);
+    expect(screen.queryByRole('list', { name: 'Answers so far' })).not.toBeInTheDocument();
+  });
+
   it('in numbered, says whether each team has answered rather than counting members who may not answer', async () => {
     await renderHost(
       makeRunningView(

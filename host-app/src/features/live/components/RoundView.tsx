@@ -20,7 +20,12 @@ export function RoundView({ view, round }: RoundViewProps) {
         <ItemDisplay item={round.item} />
         <aside className="host-panel host-main" aria-label="Round status">
           <Countdown timing={round.timing} />
-          <TeamProgress teams={view.teams} progress={round.progress} format={view.session.format} />
+          <TeamProgress
+            teams={view.teams}
+            progress={round.progress}
+            format={view.session.format}
+            ready={round.timing.status === 'ready'}
+          />
         </aside>
       </div>
       <HostControls view={view} />

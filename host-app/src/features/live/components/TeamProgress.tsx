@@ -5,6 +5,8 @@ export interface TeamProgressProps {
   teams: TeamView[];
   progress: NonNullable<HostSessionView['round']>['progress'];
   format: Format;
+  /** Before the round opens nobody can have answered, so each team's size is shown instead. */
+  ready?: boolean;
 }
 
 type ProgressRow = NonNullable<HostSessionView['round']>['progress'][number];
@@ -15,18 +17,22 @@ function progressText(row: ProgressRow, format: Format): string {
   return `${row.answered} of ${row.members} answered`;
 }
 
+const playersText = (team: TeamView): string => {
+  const playing = team.members.filter((m) => m.status !== 'removed').length;
+  return `${playing} ${playing === 1 ? 'player' : 'players'}`;
+};
+
 /** How many on each team have answered; never who, and never whether they are right. */
-export function TeamProgress({ teams, progress, format }: TeamProgressProps) {
+export function TeamProgress({ teams, progress, format, ready = false }: TeamProgressProps) {
   return (
-    <ul className="host-progress" aria-label="Answers so far">
+    <ul className="host-progress" aria-label={ready ? 'Teams' : 'Answers so far'}>
       {progress.map((row) => {
         const team = teams.find((t) => t.id === row.teamId);
         if (!team) return null;
         return (
           <li key={row.teamId} className="host-progress-row">
             <TeamName team={team} swatchSize={32} />
-            <span />
-            <span className="host-progress-count">{progressText(row, format)}</span>
+            <span className="host-progress-count">{ready ? playersText(team) : progressText(row, format)}</span>
           </li>
         );
       })}

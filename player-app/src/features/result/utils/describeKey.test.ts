@@ -7,11 +7,11 @@ describe('describeKey', () => {
     expect(describeKey(singleItem(), { type: 'single', correctOptionId: 'o-face' })).toEqual(['B. On your face']);
   });
 
-  it('lists an order key step by step', () => {
+  it('lists an order key step by step, each step with the letter it had on the answer screen', () => {
     expect(describeKey(orderItem(), { type: 'order', sequence: ['s-stop', 's-warn', 's-tell'] })).toEqual([
-      'Stop and step back',
-      'Warn people nearby',
-      'Tell the teacher',
+      'B. Stop and step back',
+      'C. Warn people nearby',
+      'A. Tell the teacher',
     ]);
   });
 

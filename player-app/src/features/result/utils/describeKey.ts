@@ -22,7 +22,8 @@ export function describeKey(item: PlayerItemView, key: ItemKey): string[] {
     case 'truefalse':
       return [key.value ? 'True' : 'False'];
     case 'order':
-      return key.sequence.map((id) => item.options.find((o) => o.id === id)?.text ?? '?');
+      // Lettered as on the answer screen, so "Your answer: B → A → C" reads against it.
+      return key.sequence.map((id) => optionLine(item, id));
     case 'numeric': {
       const lines = [`${key.value}${key.unit ? ` ${key.unit}` : ''}${toleranceText(key)}`];
       if (key.sigFigs !== null) lines.push(`Give it to ${key.sigFigs} significant figures.`);
