@@ -256,6 +256,31 @@ describe(`${LiveSessionsService.name} (integration: REST + sockets + PostgreSQL)
       }
     });
 
+    it('numbered: a teammate of a called member who answered wrong reads "not right"; of one who did not answer, no verdict', async () => {
+      const t = await newSession({ format: 'numbered', teamCount: 2 });
+      const h = await host(t, t.session.id);
+      const players: Awaited<ReturnType<typeof joinAndConnect>>[] = [];
+      for (const name of ['Ana', 'Ben', 'Cai', 'Dee']) players.push(await joinAndConnect(t.session.joinCode, name));
+      const started = await command(h, { type: 'start' });
+      const teams: { id: string; members: { playerId: string }[] }[] = started.view.teams;
+      const byId = new Map(players.map((p) => [p.playerId, p]));
+      await command(h, { type: 'open_round' });
+      const opened = await Promise.all(players.map((p) => waitFor(p.ts, 'round:opened')));
+      const calledOf = (team: (typeof teams)[number]) => opened[players.findIndex((p) => p.playerId === team.members[0].playerId)].calledPlayerId as string;
+      const [calledA, calledB] = teams.map(calledOf);
+      const otherOf = (team: (typeof teams)[number], called: string) => byId.get(team.members.find((m) => m.playerId !== called)!.playerId)!;
+      const item = t.items[0];
+      const wrong = { type: 'single', optionId: item.options.find((o) => o.id !== item.key.correctOptionId)!.id };
+      expect(await emitAck(byId.get(calledA)!.ts.socket, 'answer:submit', { clientMessageId: 'a-1', roundIndex: 0, response: wrong })).toMatchObject({ ok: true });
+      // Team B's called member says nothing.
+      await command(h, { type: 'close_round' });
+      await command(h, { type: 'reveal' });
+      const revealA = await waitFor(otherOf(teams[0], calledA).ts, 'round:revealed');
+      const revealB = await waitFor(otherOf(teams[1], calledB).ts, 'round:revealed');
+      expect(revealA).toMatchObject({ you: null, team: { answer: wrong, correct: false, points: 0 } });
+      expect(revealB).toMatchObject({ you: null, team: { answer: null, correct: null, points: 0 } });
+    });
+
     it('counts a resend with the same clientMessageId once (one row) and refuses a late answer with too_late', async () => {
       const t = await newSession({ format: 'solo' });
       const me = await joinAndConnect(t.session.joinCode, 'Ana');

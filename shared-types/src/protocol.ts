@@ -161,6 +161,7 @@ export interface PlayerReveal {
   key: ItemKey;
   explanation: string;
   you: { answered: boolean; response: ItemResponse | null; credit: number; correct: boolean; points: number } | null;
+  /** `correct` is null when the team gave no answer (numbered: the called member did not submit). */
   team: { answer: ItemResponse | null; correct: boolean | null; points: number; unity: boolean };
 }
 

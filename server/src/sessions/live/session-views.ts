@@ -107,7 +107,13 @@ export function playerReveal(s: LiveSession, roundIndex: number, results: RoundR
     you: mine
       ? { answered: mine.answered, response: (mine.response as ItemResponse | null) ?? null, credit: mine.credit, correct: mine.correct, points: mine.points }
       : null,
-    team: { answer: (team?.answer as ItemResponse | null) ?? null, correct: team?.correct ?? null, points: team?.points ?? 0, unity: team?.unity ?? false },
+    team: {
+      answer: (team?.answer as ItemResponse | null) ?? null,
+      // A team that gave no answer was not wrong: its phones say "No answer from your team".
+      correct: team && team.answer !== null ? team.correct : null,
+      points: team?.points ?? 0,
+      unity: team?.unity ?? false,
+    },
   };
 }
 

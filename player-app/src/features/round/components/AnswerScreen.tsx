@@ -6,6 +6,7 @@ import { emptyDraft, isCompleteDraft } from '../utils/answerDraft';
 import { describeResponse, sameResponse } from '../utils/describeResponse';
 import { ChoiceAnswer } from './ChoiceAnswer';
 import { Countdown } from './Countdown';
+import { OptionsPreview } from './OptionsPreview';
 import { OrderAnswer } from './OrderAnswer';
 import { TypedAnswer } from './TypedAnswer';
 import { VoteNames } from './VoteNames';
@@ -151,9 +152,12 @@ export function AnswerScreen({ round }: AnswerScreenProps) {
           </div>
         </>
       ) : (
-        <p className="discuss" role="status">
-          Discuss with your team — {calledMember?.nickname ?? 'your teammate'} answers this one.
-        </p>
+        <>
+          <p className="discuss" role="status">
+            Discuss with your team — {calledMember?.nickname ?? 'your teammate'} answers this one.
+          </p>
+          <OptionsPreview item={item} />
+        </>
       )}
 
       <div className="answer-status" aria-live="polite">
