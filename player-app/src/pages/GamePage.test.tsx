@@ -178,6 +178,16 @@ describe(GamePage.name, () => {
     expect(screen.getByRole('region', { name: "Your team's standing" })).toHaveTextContent('Team Argon is 2nd of 6');
   });
 
+  it('numbered: a teammate of the called member reads the team’s verdict, or that the team gave no answer', async () => {
+    const numbered = sessionView({ status: 'running', format: 'numbered', round: round({ calledPlayerId: 'p-ada' }) });
+    const { server } = await startGame(numbered);
+    server('round:revealed', reveal({ you: null, team: { answer: { type: 'single', optionId: 'o-bench' }, correct: false, points: 0, unity: false } }));
+    expect(screen.getByRole('heading', { name: "Your team's answer was not right" })).toBeInTheDocument();
+
+    server('round:revealed', reveal({ roundIndex: 0, you: null, team: { answer: null, correct: null, points: 0, unity: false } }));
+    expect(screen.getByRole('heading', { name: 'No answer from your team' })).toBeInTheDocument();
+  });
+
   it('shows the end summary', async () => {
     await startGame(
       sessionView({ status: 'ended', summary: { answered: 8, correct: 6, points: 4210, itemCount: 10 } }),
