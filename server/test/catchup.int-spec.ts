@@ -225,7 +225,7 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
 
     const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
     const history = (await agent.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body;
-    expect(history).toMatchObject({ rosterEntryId: ben.id, displayName: 'Ben Q.', className: 'Chemistry', canDeleteData: true });
+    expect(history).toMatchObject({ rosterEntryId: ben.id, displayName: 'Ben Q.', className: 'Chemistry · period 2', canDeleteData: true });
     // Ben answered the true/false item wrong and the single item right in the session: 1 of 2.
     expect(history.sessions).toHaveLength(1);
     expect(history.sessions[0]).toMatchObject({ sessionId, score: 1, itemCount: 2, answered: 2, percent: { value: 50 } });

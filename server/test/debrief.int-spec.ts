@@ -122,7 +122,7 @@ describe(`${DebriefService.name} (integration: sockets + REST + PostgreSQL + SMT
     const t = await playedSession();
     const d = (await t.agent.get(`/api/sessions/${t.session.id}/debrief`).expect(200)).body;
     const expected = analyseSession(t.expectedInput());
-    expect(d).toMatchObject({ sessionId: t.session.id, className: 'Chemistry', format: 'solo', unit: 'player', playerCount: 4, removedCount: 0, itemCount: 3 });
+    expect(d).toMatchObject({ sessionId: t.session.id, className: 'Chemistry · period 2', format: 'solo', unit: 'player', playerCount: 4, removedCount: 0, itemCount: 3 });
     // p = mean credit (DESIGN.md §6), by hand: single 2/4, truefalse 2/4, multi 1.5/4.
     expect(d.items.map((i: { p: { value: number } }) => i.p.value)).toEqual([0.5, 0.5, 0.375]);
     expect(d.items.map((i: { p: unknown; D: unknown; pointBiserial: unknown }) => [i.p, i.D, i.pointBiserial])).toEqual(

@@ -97,7 +97,7 @@ describe(`${LiveSessionsService.name} (integration: REST + sockets + PostgreSQL)
       const cls = (await t.agent.post('/api/classes').send({ name: 'Chemistry', period: '2' }).expect(201)).body;
       const entry = (await t.agent.post(`/api/classes/${cls.id}/roster`).send({ displayName: 'Mateo R.', tableGroup: '1' }).expect(201)).body;
       const session = (await t.agent.post('/api/sessions').send(sessionRequest(t.bankId, { classId: cls.id })).expect(201)).body;
-      expect(session.className).toBe('Chemistry');
+      expect(session.className).toBe('Chemistry · period 2'); // the period tells two sections of one course apart
       const info = (await request(http).get(`/api/play/sessions/${session.joinCode.toLowerCase()}`).expect(200)).body;
       expect(info).toEqual({ ok: true, sessionTitle: 'Lab entry & exit procedures', roster: [{ id: entry.id, displayName: 'Mateo R.', taken: false }], joiningLocked: false });
       await request(http).post('/api/play/join').send({ code: session.joinCode, rosterEntryId: entry.id }).expect(201);

@@ -106,6 +106,15 @@ export interface ClassDto {
   updatedAt: string;
 }
 
+/**
+ * A class named in one line, as lists and headers show it: "Chemistry · period 5", or just the
+ * name when no period is set. Two periods of one course share a name, so the period tells them apart.
+ */
+export function classLabel(cls: { name: string; period?: string | null }): string {
+  const period = cls.period?.trim();
+  return period ? `${cls.name} · period ${period}` : cls.name;
+}
+
 /** A student in a class. */
 export interface RosterEntryDto {
   id: string;

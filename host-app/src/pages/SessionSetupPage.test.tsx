@@ -44,6 +44,8 @@ describe('SessionSetupPage', () => {
     await screen.findByRole('option', { name: 'Lab entry & exit procedures (3 items)' });
     expect(screen.queryByRole('option', { name: /Old bank/ })).not.toBeInTheDocument();
     await user.selectOptions(bankSelect, 'bank-1');
+    // Two sections of one course share a name, so the period is in the option.
+    expect(screen.getByRole('option', { name: 'Chemistry 10 · period P3' })).toBeInTheDocument();
     await user.selectOptions(screen.getByLabelText('Class'), 'class-1');
 
     await user.click(await screen.findByRole('checkbox', { name: 'Choose and order the items myself' }));

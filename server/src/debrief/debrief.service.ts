@@ -1,5 +1,6 @@
 import { HttpStatus, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { classLabel } from '@covalent/shared-types';
 import type {
   DebriefDto,
   DebriefEmailResponse,
@@ -160,7 +161,7 @@ export class DebriefService {
         bankId: row.bankId,
         bankTitle: row.bankTitle,
         classId: row.classId,
-        className: row.class?.name ?? null,
+        className: row.class ? classLabel(row.class) : null,
         format: row.format,
         startedAt: row.startedAt,
         createdAt: row.createdAt,

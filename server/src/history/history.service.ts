@@ -1,5 +1,6 @@
 import { HttpStatus, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { classLabel } from '@covalent/shared-types';
 import type { ClassStudentTrendDto, ClassTrendDto, DebriefDto, StudentHistoryDto, StudentSessionDto } from '@covalent/shared-types';
 import { DataSource } from 'typeorm';
 import { CatchupService } from '../catchup/catchup.service';
@@ -52,7 +53,7 @@ export class HistoryService {
     });
     return {
       classId: cls.id,
-      className: cls.name,
+      className: classLabel(cls),
       sessions: played.map((p) => ({ sessionId: p.row.id, bankTitle: p.row.bankTitle, endedAt: p.endedAt })),
       tags: accuracyByTag(
         played.map((p) => ({ sessionId: p.row.id, endedAt: p.endedAt, items: p.debrief.items.map((i) => ({ tags: i.tags, p: i.p.value })) })),
@@ -87,7 +88,7 @@ export class HistoryService {
     );
     return {
       classId: cls.id,
-      className: cls.name,
+      className: classLabel(cls),
       rosterEntryId: entry.id,
       displayName: entry.displayName,
       tableGroup: entry.tableGroup,

@@ -1,5 +1,6 @@
 import { HttpStatus, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { classLabel } from '@covalent/shared-types';
 import type { SessionDto } from '@covalent/shared-types';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { DataSource, In, QueryFailedError } from 'typeorm';
@@ -55,7 +56,7 @@ export class SessionsService {
       if (access === 'admin') {
         throw new ApiException(HttpStatus.FORBIDDEN, 'forbidden', "Only the class's teacher or a co-teacher can run a session for it.");
       }
-      className = cls.name;
+      className = classLabel(cls);
     }
     const items = await this.pickItems(bank.id, dto.itemIds);
     const meta: LiveSessionMeta = {
@@ -176,7 +177,7 @@ export class SessionsService {
           bankId: row.bankId ?? '',
           bankTitle: row.bankTitle,
           classId: row.classId,
-          className: row.class?.name ?? null,
+          className: row.class ? classLabel(row.class) : null,
           format: row.format,
           roundSeconds: row.settings.roundSeconds,
           speedWeight: row.settings.speedWeight,

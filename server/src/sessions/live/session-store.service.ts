@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { classLabel } from '@covalent/shared-types';
 import type { ItemResponse } from '@covalent/shared-types';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
 import type { PostgresDriver } from 'typeorm/driver/postgres/PostgresDriver';
@@ -209,7 +210,7 @@ export class SessionStore {
     ]);
     return {
       row,
-      className: cls?.name ?? null,
+      className: cls ? classLabel(cls) : null,
       players,
       teams,
       pending: pending.map((r) => ({

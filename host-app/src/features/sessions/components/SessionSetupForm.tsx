@@ -1,4 +1,4 @@
-import { FORMATS, MIXER_MODES, NAME_PACKS, STANDINGS_VIEWS, type SessionDto } from '@covalent/shared-types';
+import { FORMATS, MIXER_MODES, NAME_PACKS, STANDINGS_VIEWS, classLabel, type SessionDto } from '@covalent/shared-types';
 import { Button, Card, Flex, RadioCards, RadioGroup, Text, TextField } from '@radix-ui/themes';
 import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { FormErrorCallout } from '@/features/forms/components/FormErrorCallout';
@@ -122,8 +122,7 @@ export function SessionSetupForm({ initialBankId = '', onCreated }: SessionSetup
               <option value="">Ad-hoc group (students type a nickname)</option>
               {classes.data?.map((c) => (
                 <option key={c.id} value={c.id}>
-                  {c.name}
-                  {c.period ? ` · ${c.period}` : ''}
+                  {classLabel(c)}
                 </option>
               ))}
             </select>
