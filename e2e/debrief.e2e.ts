@@ -112,7 +112,14 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
 
   const studentTable = page.getByRole('table', { name: 'Students' });
   await expect(studentTable.getByRole('row')).toHaveCount(5); // header + 4 students
-  await expect(studentTable.getByRole('row').filter({ hasText: students[0] })).toContainText('66.7%'); // right on items 1 and 3 of 3
+  const firstStudent = studentTable.getByRole('row').filter({ hasText: students[0] });
+  await expect(firstStudent).toContainText('66.7%'); // right on items 1 and 3 of 3
+  // Missed items are one line each until the teacher asks for the answers beside the keys.
+  await expect(firstStudent).toContainText('Item 2');
+  await expect(firstStudent).not.toContainText('Key:');
+  const answersSwitch = page.getByRole('switch', { name: 'Show each answer beside the key' });
+  await answersSwitch.click();
+  await expect(firstStudent).toContainText('Key:');
 
   // Both CSVs download with their headers.
   for (const [name, header] of [
@@ -145,6 +152,8 @@ test('the teacher reads, sorts, exports and sends the debrief of a played sessio
   await expect(page.getByRole('navigation')).toBeHidden();
   await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(page.getByRole('button', { name: 'Create catch-up' })).toBeHidden();
+  await expect(answersSwitch).toBeHidden();
+  await expect(firstStudent).toContainText('Key:'); // printed as the switch left it
   await expect(items).toBeVisible();
   await expect(studentTable).toBeVisible();
   const pdf = await page.pdf({ format: 'A4' });

@@ -116,10 +116,14 @@ describe('DebriefPage', () => {
     const row = within(table).getByRole('row', { name: /Amal Haddad/ });
     expect(row).toHaveTextContent('1.00');
     expect(row).toHaveTextContent('33.3%');
-    const missed = within(row).getAllByRole('listitem');
-    expect(missed[0]).toHaveTextContent('Item 2 Pick the pipette');
-    expect(missed[0]).toHaveTextContent('Answer: A. Beaker · Key: B. Volumetric pipette');
-    expect(missed[1]).toHaveTextContent('Answer: not answered · Key: B. Volumetric pipette');
+    // One line per missed item first; the switch adds the student's answer beside the key.
+    const missed = () => within(within(table).getByRole('row', { name: /Amal Haddad/ })).getAllByRole('listitem');
+    expect(missed()[0]).toHaveTextContent(/^Item 2 Pick the pipette$/);
+    expect(missed()[1]).toHaveTextContent(/^Item 3 Rinse order \(not answered\)$/);
+    await userEvent.setup().click(screen.getByRole('switch', { name: 'Show each answer beside the key' }));
+    expect(missed()[0]).toHaveTextContent('Item 2 Pick the pipette');
+    expect(missed()[0]).toHaveTextContent('Answer: A. Beaker · Key: B. Volumetric pipette');
+    expect(missed()[1]).toHaveTextContent('Answer: not answered · Key: B. Volumetric pipette');
   });
 
   it('shows team points, accuracy and unity rate', async () => {

@@ -1,5 +1,6 @@
 import type { DebriefStudentDto, MissedItemDto } from '@covalent/shared-types';
-import { Table, Text } from '@radix-ui/themes';
+import { Flex, Switch, Table, Text } from '@radix-ui/themes';
+import { useState } from 'react';
 import { ConfirmButton } from '@/features/forms/components/ConfirmButton';
 import { useDeleteSessionPlayerData } from '../hooks/useDeleteSessionPlayerData';
 import { formatPercentValue } from '../utils/formatPercentValue';
@@ -16,33 +17,61 @@ const DELETE_DESCRIPTION =
 
 const studentName = (s: DebriefStudentDto): string => s.rosterName ?? s.nickname;
 
-function MissedList({ missed }: { missed: MissedItemDto[] }) {
+/** "not answered" or "partial credit 0.90" when it says more than "missed"; null otherwise. */
+function missNote(m: MissedItemDto): string | null {
+  if (!m.answered) return 'not answered';
+  return m.credit > 0 ? `partial credit ${m.credit.toFixed(2)}` : null;
+}
+
+/** One line per missed item; with `answers`, the student's answer beside the key under it. */
+function MissedList({ missed, answers }: { missed: MissedItemDto[]; answers: boolean }) {
   if (missed.length === 0) return <Text color="gray">None</Text>;
   return (
     <ul style={{ margin: 0, paddingLeft: '1.1em' }}>
       {[...missed]
         .sort((a, b) => a.position - b.position)
-        .map((m) => (
-          <li key={m.itemId}>
-            <Text weight="bold">Item {m.position + 1}</Text> {m.prompt}
-            <br />
-            <Text size="2">
-              Answer: {m.answered ? m.answerText : 'not answered'} · Key: {m.keyText}
-              {m.credit > 0 && ` · partial credit ${m.credit.toFixed(2)}`}
-            </Text>
-          </li>
-        ))}
+        .map((m) => {
+          const note = missNote(m);
+          return (
+            <li key={m.itemId}>
+              <Text weight="bold">Item {m.position + 1}</Text> {m.prompt}
+              {answers ? (
+                <>
+                  <br />
+                  <Text size="2">
+                    Answer: {m.answered ? m.answerText : 'not answered'} · Key: {m.keyText}
+                    {m.credit > 0 && ` · partial credit ${m.credit.toFixed(2)}`}
+                  </Text>
+                </>
+              ) : (
+                note && <Text size="2" color="gray">{` (${note})`}</Text>
+              )}
+            </li>
+          );
+        })}
     </ul>
   );
 }
 
-/** Each student's score and the items they missed, their answer beside the key; a teacher can delete one student's data here. */
+/**
+ * Each student's score and the items they missed, their answer beside the key on request;
+ * a teacher can delete one student's data here.
+ */
 export function StudentsTable({ sessionId, students }: StudentsTableProps) {
   const sorted = [...students].sort((a, b) => studentName(a).localeCompare(studentName(b)));
   const remove = useDeleteSessionPlayerData(sessionId);
+  // A class's answers to order items run to paragraphs; the table starts with one line per item.
+  const [answers, setAnswers] = useState(false);
   return (
     <>
       <DeletePlayerDataStatus mutation={remove} />
+      {/* Printing prints the table as the switch left it. */}
+      <Text as="label" size="2" className="debrief-no-print">
+        <Flex gap="2" align="center" pb="3">
+          <Switch checked={answers} onCheckedChange={setAnswers} />
+          Show each answer beside the key
+        </Flex>
+      </Text>
       <Table.Root variant="surface">
         <caption className="visually-hidden">Students</caption>
         <Table.Header>
@@ -85,7 +114,7 @@ export function StudentsTable({ sessionId, students }: StudentsTableProps) {
                 </Table.Cell>
                 <Table.Cell>{s.answered}</Table.Cell>
                 <Table.Cell>
-                  <MissedList missed={s.missed} />
+                  <MissedList missed={s.missed} answers={answers} />
                 </Table.Cell>
                 <Table.Cell className="debrief-no-print">
                   <ConfirmButton
