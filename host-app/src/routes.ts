@@ -37,7 +37,10 @@ export const routes = {
   sessions: { path: '/sessions', build: () => '/sessions' },
   session: { path: '/sessions/:sessionId', build: (sessionId: string) => `/sessions/${segment(sessionId)}` },
   /** Setting up a session; `bankId` preselects a bank. */
-  sessionNew: { path: '/sessions/new', build: (bankId?: string) => withQuery('/sessions/new', { bankId }) },
+  sessionNew: {
+    path: '/sessions/new',
+    build: (preset: { bankId?: string; classId?: string } = {}) => withQuery('/sessions/new', preset),
+  },
   /** The projected host screen, full-screen outside the app shell. */
   hostSession: { path: '/host/:sessionId', build: (sessionId: string) => `/host/${segment(sessionId)}` },
   debriefs: { path: '/debriefs', build: () => '/debriefs' },

@@ -126,6 +126,18 @@ describe('ClassDetailPage', () => {
     expect(screen.queryByLabelText('Display name')).not.toBeInTheDocument();
   });
 
+  it('starts a session for this class from its page, for its teachers only', async () => {
+    openClass(makeClassDetail({ id: CLASS_ID, roster, access: 'co-teacher' }));
+    const link = await screen.findByRole('link', { name: 'New session for this class' });
+    expect(link).toHaveAttribute('href', `/sessions/new?classId=${CLASS_ID}`);
+  });
+
+  it('offers no session to an admin reading the class', async () => {
+    openClass(makeClassDetail({ id: CLASS_ID, roster, access: 'admin' }));
+    await screen.findByRole('link', { name: 'Trends by tag' });
+    expect(screen.queryByRole('link', { name: 'New session for this class' })).not.toBeInTheDocument();
+  });
+
   it("links each roster row to that student's history, for a co-teacher too", async () => {
     const [finn, zara] = roster;
     openClass(makeClassDetail({ roster, access: 'co-teacher', ownerName: 'Maja Lindqvist' }));

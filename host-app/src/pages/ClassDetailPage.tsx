@@ -68,6 +68,12 @@ export function ClassDetailPage() {
             {data.archivedAt ? 'Unarchive class' : 'Archive class'}
           </Button>
         )}
+        {data.access !== 'admin' && !data.archivedAt && (
+          // Only the class's teacher or a co-teacher runs a session for it (the server checks too).
+          <Button asChild variant="soft">
+            <Link to={routes.sessionNew.build({ classId })}>New session for this class</Link>
+          </Button>
+        )}
         <Button asChild variant="soft" color="gray">
           <Link to={routes.classTrends.build(classId)}>Trends by tag</Link>
         </Button>

@@ -83,9 +83,16 @@ describe('SessionSetupPage', () => {
     });
   });
 
+  it('comes with the class chosen when opened from a class page', async () => {
+    stubSetup();
+    renderApp(routes.sessionNew.build({ classId: 'class-1' }));
+    await screen.findByRole('option', { name: 'Chemistry 10 · period P3' });
+    expect(screen.getByLabelText('Class')).toHaveValue('class-1');
+  });
+
   it('names each format in our words with a one-line description', async () => {
     stubSetup();
-    renderApp(routes.sessionNew.build('bank-1'));
+    renderApp(routes.sessionNew.build({ bankId: 'bank-1' }));
     const formats = within((await screen.findByText('Format')).closest('fieldset')!);
     expect(formats.getAllByRole('radio').map((r) => r.textContent)).toEqual([
       expect.stringMatching(/^huddle — Team vote/),

@@ -11,6 +11,7 @@ export function SessionSetupPage() {
       <PageHeader title="New session" description="Choose what to play and how; students join once the host screen is up." />
       <SessionSetupForm
         initialBankId={search.get('bankId') ?? ''}
+        initialClassId={search.get('classId') ?? ''}
         onCreated={(session) => navigate(routes.hostSession.build(session.id))}
       />
     </>

@@ -18,6 +18,8 @@ import '../sessionSetup.css';
 
 export interface SessionSetupFormProps {
   initialBankId?: string;
+  /** From a class's page: the class is chosen already. */
+  initialClassId?: string;
   onCreated: (session: SessionDto) => void;
 }
 
@@ -44,9 +46,9 @@ function FieldError({ id, message }: { id: string; message?: string }) {
 }
 
 /** Everything a session needs before students join: bank, who plays, format, timing and teams. */
-export function SessionSetupForm({ initialBankId = '', onCreated }: SessionSetupFormProps) {
+export function SessionSetupForm({ initialBankId = '', initialClassId = '', onCreated }: SessionSetupFormProps) {
   const id = useId();
-  const [values, setValues] = useState<SessionSetupValues>({ ...DEFAULT_SETUP, bankId: initialBankId });
+  const [values, setValues] = useState<SessionSetupValues>({ ...DEFAULT_SETUP, bankId: initialBankId, classId: initialClassId });
   const [errors, setErrors] = useState<Partial<Record<SessionSetupField, string>>>({});
   const banks = useSetupBanks();
   const classes = useSetupClasses();
