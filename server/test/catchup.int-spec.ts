@@ -283,6 +283,21 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     expect((await co.get(`/api/classes/${cls}/roster/${ben.id}/history`).expect(200)).body.sessions).toHaveLength(1);
   });
 
+  it('closes a catch-up once deletions leave it no cards, so its code stops working', async () => {
+    const { agent, sessionId, ana, ben } = await endedClassSession();
+    const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    await agent.delete(`/api/classes/${cls}/roster/${ana.id}/data`).expect(200);
+    // Ben still has his card: the catch-up stays open for him.
+    expect((await request(http).get(`/api/play/catchups/${code}`).expect(200)).body.students.map((s: { displayName: string }) => s.displayName)).toEqual(['Ben Q.']);
+    await agent.delete(`/api/classes/${cls}/roster/${ben.id}/data`).expect(200);
+    // A closed code is no code at all (codes are unique among open catch-ups only).
+    const closed = await request(http).get(`/api/play/catchups/${code}`).expect(404);
+    expect(closed.body).toMatchObject({ error: 'unknown_code' });
+    const listed = (await agent.get(`/api/sessions/${sessionId}/catchups`).expect(200)).body;
+    expect(listed.find((c: { id: string }) => c.id === id)).toMatchObject({ closedAt: expect.any(String) });
+  });
+
   it('deletes a student\u2019s catch-up cards with their session data, and the history then shows nothing of them', async () => {
     const { agent, sessionId, tf, ben } = await endedClassSession();
     const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
