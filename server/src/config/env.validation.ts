@@ -11,6 +11,7 @@ import {
   Min,
   MinLength,
   Validate,
+  ValidationArguments,
   ValidateIf,
   validateSync,
   ValidatorConstraint,
@@ -42,6 +43,31 @@ class SecureIssuerConstraint implements ValidatorConstraintInterface {
   }
   defaultMessage(): string {
     return 'must be an https URL (plain http only for a provider on 127.0.0.1 or localhost)';
+  }
+}
+
+/** The server's own route for the provider's redirect back (AuthController). */
+export const SIGN_ON_CALLBACK_PATH = '/api/auth/sign-on/callback';
+
+/**
+ * The redirect URI must come back to this server: the same origin as PUBLIC_URL (the
+ * sign-on flow cookie is set there and is sent only to it) and the callback route.
+ * Anything else would fail every sign-on with a lost-flow error.
+ */
+@ValidatorConstraint({ name: 'ownCallback' })
+class OwnCallbackConstraint implements ValidatorConstraintInterface {
+  validate(value: unknown, args: ValidationArguments): boolean {
+    if (typeof value !== 'string') return false;
+    try {
+      const redirect = new URL(value);
+      const publicUrl = new URL((args.object as EnvironmentVariables).PUBLIC_URL);
+      return redirect.origin === publicUrl.origin && redirect.pathname === SIGN_ON_CALLBACK_PATH && !redirect.search;
+    } catch {
+      return false;
+    }
+  }
+  defaultMessage(): string {
+    return `must be PUBLIC_URL's origin followed by ${SIGN_ON_CALLBACK_PATH} (the flow cookie is only sent back there)`;
   }
 }
 
@@ -137,6 +163,7 @@ export class EnvironmentVariables {
 
   /** Defaults to PUBLIC_URL + /api/auth/sign-on/callback; must match the provider's registration exactly. */
   @IsOptional() @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
+  @Validate(OwnCallbackConstraint)
   OIDC_REDIRECT_URI?: string;
 }
 

@@ -35,11 +35,29 @@ describe('OIDC configuration', () => {
 
   it('takes an explicit redirect URI and refuses plain http for a provider elsewhere', () => {
     const cfg = withEnv(
-      { ...BASE, OIDC_ISSUER: 'https://sso.school.example', OIDC_CLIENT_ID: 'c', OIDC_CLIENT_SECRET: 's', OIDC_REDIRECT_URI: 'https://covalent.school.example/api/auth/sign-on/callback' },
+      {
+        ...BASE,
+        PUBLIC_URL: 'https://covalent.school.example',
+        OIDC_ISSUER: 'https://sso.school.example',
+        OIDC_CLIENT_ID: 'c',
+        OIDC_CLIENT_SECRET: 's',
+        OIDC_REDIRECT_URI: 'https://covalent.school.example/api/auth/sign-on/callback',
+      },
       () => oidcConfig(),
     );
     expect(cfg).toMatchObject({ allowHttp: false, redirectUri: 'https://covalent.school.example/api/auth/sign-on/callback' });
     expect(() => validateEnv({ ...BASE, OIDC_ISSUER: 'http://sso.school.example', OIDC_CLIENT_ID: 'c', OIDC_CLIENT_SECRET: 's' })).toThrow(/OIDC_ISSUER: .*https/);
+  });
+
+  it('refuses a redirect URI that does not come back to this server’s callback', () => {
+    const sso = { ...BASE, OIDC_ISSUER: 'https://sso.school.example', OIDC_CLIENT_ID: 'c', OIDC_CLIENT_SECRET: 's' };
+    // Another origin than PUBLIC_URL: the flow cookie set on 127.0.0.1:3000 would never reach it.
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'https://covalent.school.example/api/auth/sign-on/callback' })).toThrow(
+      /OIDC_REDIRECT_URI: must be PUBLIC_URL's origin/,
+    );
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3001/api/auth/sign-on/callback' })).toThrow(/OIDC_REDIRECT_URI/);
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/callback' })).toThrow(/OIDC_REDIRECT_URI/);
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/api/auth/sign-on/callback' })).not.toThrow();
   });
 
   it('names every missing client variable at once when an issuer is set', () => {

@@ -1,7 +1,7 @@
 import { registerAs } from '@nestjs/config';
-import { isLoopbackUrl, validateEnv } from './env.validation';
+import { isLoopbackUrl, SIGN_ON_CALLBACK_PATH, validateEnv } from './env.validation';
 
-export const SIGN_ON_CALLBACK_PATH = '/api/auth/sign-on/callback';
+export { SIGN_ON_CALLBACK_PATH };
 
 /** School sign-on through OpenID Connect; `enabled` is false when OIDC_ISSUER is unset. */
 export const oidcConfig = registerAs('oidc', () => {
