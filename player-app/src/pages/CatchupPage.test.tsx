@@ -80,12 +80,14 @@ describe(CatchupPage.name, () => {
     await user.click(screen.getByRole('button', { name: 'Check answer' }));
     expect(await screen.findByRole('heading', { name: /Correct/ })).toBeInTheDocument();
     expect(screen.getByText('Aisles stay clear.')).toBeInTheDocument();
+    expect(screen.getByText('Your answer: False')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Next item' }));
 
     await user.click(await screen.findByRole('button', { name: /Beaker/ }));
     await user.click(screen.getByRole('button', { name: 'Check answer' }));
     expect(await screen.findByRole('heading', { name: /Incorrect/ })).toBeInTheDocument();
     expect(screen.getByText('B. Volumetric pipette')).toBeInTheDocument();
+    expect(screen.getByText(/^Your answer: [A-D]\. Beaker$/)).toBeInTheDocument();
     expect(screen.getByText('It is calibrated to one volume.')).toBeInTheDocument();
     expect(bodies('/answers')).toEqual([
       { token: 'tok', itemId: 'item-tf', response: { type: 'truefalse', value: false } },

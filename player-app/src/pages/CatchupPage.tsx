@@ -24,7 +24,13 @@ function CatchupRun({ code }: { code: string }) {
       const item = state.run.items[state.index];
       if (!item) return null;
       return state.feedback ? (
-        <CatchupFeedback item={item} feedback={state.feedback} last={state.index === state.run.items.length - 1} onNext={next} />
+        <CatchupFeedback
+          item={item}
+          feedback={state.feedback}
+          answered={state.answered}
+          last={state.index === state.run.items.length - 1}
+          onNext={next}
+        />
       ) : (
         <CatchupQuestion
           key={item.itemId}

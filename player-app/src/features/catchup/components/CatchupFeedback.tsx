@@ -1,16 +1,19 @@
 import { useEffect, useRef } from 'react';
-import type { CatchupAnswerResponse, CatchupItemView } from '@covalent/shared-types';
+import type { CatchupAnswerResponse, CatchupItemView, ItemResponse } from '@covalent/shared-types';
 import { describeKey } from '@/features/result';
+import { describeResponse } from '@/features/round';
 
 export interface CatchupFeedbackProps {
   item: CatchupItemView;
   feedback: CatchupAnswerResponse;
+  /** The student's own answer, shown under the right one. */
+  answered: ItemResponse | null;
   last: boolean;
   onNext: () => void;
 }
 
 /** Right or not in words, the right answer and the explanation, then on to the next item. */
-export function CatchupFeedback({ item, feedback, last, onNext }: CatchupFeedbackProps) {
+export function CatchupFeedback({ item, feedback, answered, last, onNext }: CatchupFeedbackProps) {
   const heading = useRef<HTMLHeadingElement>(null);
   const keyLines = describeKey(item, feedback.key);
   const partly = !feedback.correct && feedback.credit > 0;
@@ -30,11 +33,20 @@ export function CatchupFeedback({ item, feedback, last, onNext }: CatchupFeedbac
       </h1>
       <p className="result-prompt">{item.prompt}</p>
       <h2 className="result-subtitle">The right answer</h2>
-      {keyLines.map((line) => (
-        <p key={line} className="result-key">
-          {line}
-        </p>
-      ))}
+      {feedback.key.type === 'order' ? (
+        <ol className="result-key">
+          {keyLines.map((line) => (
+            <li key={line}>{line}</li>
+          ))}
+        </ol>
+      ) : (
+        keyLines.map((line) => (
+          <p key={line} className="result-key">
+            {line}
+          </p>
+        ))
+      )}
+      {answered && <p>Your answer: {describeResponse(item, answered)}</p>}
       {feedback.explanation && (
         <>
           <h2 className="result-subtitle">Why</h2>

@@ -12,6 +12,8 @@ export type CatchupState =
       index: number;
       /** The server's verdict on the current item, once answered. */
       feedback: CatchupAnswerResponse | null;
+      /** What the student sent for the current item (shown beside the right answer). */
+      answered: ItemResponse | null;
       right: number;
       nextDueAt: string | null;
       pending: boolean;
@@ -50,7 +52,7 @@ export function useCatchup(code: string): Catchup {
       setState(
         run.items.length === 0
           ? { phase: 'finished', displayName: run.displayName, right: 0, total: 0, nextDueAt: run.nextDueAt }
-          : { phase: 'playing', run, index: 0, feedback: null, right: 0, nextDueAt: run.nextDueAt, pending: false, error: null },
+          : { phase: 'playing', run, index: 0, feedback: null, answered: null, right: 0, nextDueAt: run.nextDueAt, pending: false, error: null },
       );
     },
     [code, state],
@@ -68,6 +70,7 @@ export function useCatchup(code: string): Catchup {
         ...state,
         pending: false,
         feedback: result,
+        answered: response,
         right: state.right + (result.correct ? 1 : 0),
         nextDueAt: result.nextDueAt,
       });
@@ -78,7 +81,7 @@ export function useCatchup(code: string): Catchup {
   const next = useCallback(() => {
     if (state.phase !== 'playing' || !state.feedback) return;
     const index = state.index + 1;
-    if (index < state.run.items.length) return setState({ ...state, index, feedback: null, error: null });
+    if (index < state.run.items.length) return setState({ ...state, index, feedback: null, answered: null, error: null });
     setState({ phase: 'finished', displayName: state.run.displayName, right: state.right, total: state.run.items.length, nextDueAt: state.nextDueAt });
   }, [state]);
 
