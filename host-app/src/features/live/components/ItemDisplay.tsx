@@ -14,7 +14,7 @@ const HINTS: Partial<Record<PlayerItemView['type'], string>> = {
 export function ItemDisplay({ item }: ItemDisplayProps) {
   const hint = item.type === 'numeric' ? `Answer with a number${item.unitHint ? ` in ${item.unitHint}` : ''}.` : HINTS[item.type];
   return (
-    <div className="host-main">
+    <div className="host-main host-item">
       <h2 className="host-prompt">{item.prompt}</h2>
       {item.imageUrl && <img className="host-item-image" src={item.imageUrl} alt="Picture for this item" />}
       {hint && <p className="host-answer-hint">{hint}</p>}
@@ -25,7 +25,10 @@ export function ItemDisplay({ item }: ItemDisplayProps) {
         </ul>
       ) : (
         item.options.length > 0 && (
-          <ol className="host-options" aria-label={item.type === 'order' ? 'Steps' : 'Options'}>
+          <ol
+            className={item.type === 'order' ? 'host-options host-options-steps' : 'host-options'}
+            aria-label={item.type === 'order' ? 'Steps' : 'Options'}
+          >
             {item.options.map((option, index) => (
               <li key={option.id} className="host-option">
                 <span className="host-option-letter">{optionLetter(index)}</span>
