@@ -73,11 +73,18 @@ describe('separateKeepApart', () => {
     expect(teamOf && isSeparation(6, 5, star, teamOf)).toBe(true);
   });
 
-  it('gives up, returning null, when the node budget runs out', () => {
-    const pairs: [number, number][] = [];
-    for (let a = 0; a < 9; a++) for (let b = a + 1; b < 9; b++) pairs.push([a, b]);
-    // K9 into 8 teams is impossible; a budget of 1 stops at the first step.
-    expect(separateKeepApart(modelOf(30, pairs), 8, createRng('budget'), 1)).toBeNull();
+  it('gives up, returning null, when the work budget runs out', () => {
+    // Solvable (two pairs into 3 teams), so only the budget can make it fail.
+    const pairs: [number, number][] = [[0, 1], [2, 3]];
+    expect(separateKeepApart(modelOf(12, pairs), 3, createRng('budget'), 1)).toBeNull();
+    const teamOf = separateKeepApart(modelOf(12, pairs), 3, createRng('budget'));
+    expect(teamOf && isSeparation(12, 3, pairs, teamOf)).toBe(true);
+  });
+
+  it('refuses at once a player kept apart from too many to fill any team', () => {
+    // 300 players in teams of 4; player 0 is kept apart from everyone else, so no team can hold them.
+    const star: [number, number][] = Array.from({ length: 299 }, (_, i) => [0, i + 1]);
+    expect(separateKeepApart(modelOf(300, star), 75, createRng('star'))).toBeNull();
   });
 
   it('finds a separation exactly when one exists (exhaustive check, up to 8 players)', () => {
