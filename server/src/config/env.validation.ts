@@ -61,13 +61,38 @@ class OwnCallbackConstraint implements ValidatorConstraintInterface {
     try {
       const redirect = new URL(value);
       const publicUrl = new URL((args.object as EnvironmentVariables).PUBLIC_URL);
-      return redirect.origin === publicUrl.origin && redirect.pathname === SIGN_ON_CALLBACK_PATH && !redirect.search;
+      // No query and no fragment either (RFC 6749 §3.1.2: a redirection endpoint has no fragment).
+      return (
+        redirect.origin === publicUrl.origin &&
+        redirect.pathname === SIGN_ON_CALLBACK_PATH &&
+        !value.includes('?') &&
+        !value.includes('#')
+      );
     } catch {
       return false;
     }
   }
   defaultMessage(): string {
     return `must be PUBLIC_URL's origin followed by ${SIGN_ON_CALLBACK_PATH} (the flow cookie is only sent back there)`;
+  }
+}
+
+/**
+ * With sign-on, PUBLIC_URL must be the server's root: the app is served at "/", and the
+ * default redirect URI (PUBLIC_URL + the callback) and the flow cookie's path assume it.
+ */
+@ValidatorConstraint({ name: 'publicUrlAtRoot' })
+class PublicUrlAtRootConstraint implements ValidatorConstraintInterface {
+  validate(_value: unknown, args: ValidationArguments): boolean {
+    try {
+      const url = new URL((args.object as EnvironmentVariables).PUBLIC_URL);
+      return url.pathname === '/' && !url.search && !url.hash;
+    } catch {
+      return false;
+    }
+  }
+  defaultMessage(): string {
+    return 'needs PUBLIC_URL to be the server root (scheme, host and port, no path) for sign-on';
   }
 }
 
@@ -150,6 +175,7 @@ export class EnvironmentVariables {
   @IsOptional()
   @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
   @Validate(SecureIssuerConstraint)
+  @Validate(PublicUrlAtRootConstraint)
   OIDC_ISSUER?: string;
 
   /** Required with OIDC_ISSUER: the client registered for Covalent at the provider. */
@@ -162,7 +188,8 @@ export class EnvironmentVariables {
   OIDC_CLIENT_SECRET?: string;
 
   /** Defaults to PUBLIC_URL + /api/auth/sign-on/callback; must match the provider's registration exactly. */
-  @IsOptional() @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
+  @ValidateIf((env: EnvironmentVariables) => !!env.OIDC_ISSUER && env.OIDC_REDIRECT_URI !== undefined)
+  @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
   @Validate(OwnCallbackConstraint)
   OIDC_REDIRECT_URI?: string;
 }

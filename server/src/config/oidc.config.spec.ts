@@ -57,7 +57,19 @@ describe('OIDC configuration', () => {
     );
     expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3001/api/auth/sign-on/callback' })).toThrow(/OIDC_REDIRECT_URI/);
     expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/callback' })).toThrow(/OIDC_REDIRECT_URI/);
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/api/auth/sign-on/callback#x' })).toThrow(/OIDC_REDIRECT_URI/);
+    expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/api/auth/sign-on/callback?' })).toThrow(/OIDC_REDIRECT_URI/);
     expect(() => validateEnv({ ...sso, OIDC_REDIRECT_URI: 'http://127.0.0.1:3000/api/auth/sign-on/callback' })).not.toThrow();
+    // Without sign-on a leftover redirect URI is ignored rather than stopping the server.
+    expect(() => validateEnv({ ...BASE, OIDC_REDIRECT_URI: 'https://elsewhere.example/cb' })).not.toThrow();
+  });
+
+  it('with sign-on, wants PUBLIC_URL at the server root (the default redirect URI is built from it)', () => {
+    const sso = { DATABASE_URL: BASE.DATABASE_URL, APP_SECRET: BASE.APP_SECRET, OIDC_ISSUER: 'https://sso.school.example', OIDC_CLIENT_ID: 'c', OIDC_CLIENT_SECRET: 's' };
+    expect(() => validateEnv({ ...sso, PUBLIC_URL: 'https://school.example/covalent' })).toThrow(/OIDC_ISSUER: .*PUBLIC_URL/);
+    expect(() => validateEnv({ ...sso, PUBLIC_URL: 'https://school.example/' })).not.toThrow();
+    expect(() => validateEnv({ ...sso, PUBLIC_URL: 'https://school.example' })).not.toThrow();
+    expect(() => validateEnv({ ...BASE, PUBLIC_URL: 'https://school.example/covalent' })).not.toThrow(); // no sign-on, no rule
   });
 
   it('names every missing client variable at once when an issuer is set', () => {
