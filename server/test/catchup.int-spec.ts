@@ -298,6 +298,18 @@ describe(`${CatchupService.name} (integration: REST + PostgreSQL)`, () => {
     expect(listed.find((c: { id: string }) => c.id === id)).toMatchObject({ closedAt: expect.any(String) });
   });
 
+  it('closes a catch-up whose last students leave the roster (one removed, then the roster replaced by CSV)', async () => {
+    const { agent, sessionId, ana } = await endedClassSession();
+    const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;
+    const cls = (await ctx.db.query('SELECT class_id FROM sessions WHERE id = $1', [sessionId]))[0].class_id;
+    await agent.delete(`/api/classes/${cls}/roster/${ana.id}`).expect(204);
+    expect((await request(http).get(`/api/play/catchups/${code}`).expect(200)).body.students.map((s: { displayName: string }) => s.displayName)).toEqual(['Ben Q.']);
+    await agent.post(`/api/classes/${cls}/roster/import`).field('mode', 'replace').attach('file', Buffer.from('display_name,table_group,seat_number,time_multiplier\nZoe N.,,,1\n'), { filename: 'roster.csv', contentType: 'text/csv' }).expect(200);
+    await request(http).get(`/api/play/catchups/${code}`).expect(404);
+    const listed = (await agent.get(`/api/sessions/${sessionId}/catchups`).expect(200)).body;
+    expect(listed.find((c: { id: string }) => c.id === id)).toMatchObject({ closedAt: expect.any(String) });
+  });
+
   it('deletes a student\u2019s catch-up cards with their session data, and the history then shows nothing of them', async () => {
     const { agent, sessionId, tf, ben } = await endedClassSession();
     const { id, code } = (await agent.post(`/api/sessions/${sessionId}/catchups`).expect(201)).body;

@@ -6,3 +6,4 @@ export { catchupItemView } from './catchup-views';
 export { CatchupEntity } from './entities/catchup.entity';
 export { CatchupCardEntity } from './entities/catchup-card.entity';
 export { CatchupAnswerEntity } from './entities/catchup-answer.entity';
+export { closeEmptyCatchups } from './close-empty-catchups';

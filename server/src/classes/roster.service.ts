@@ -2,6 +2,7 @@ import { HttpStatus, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { ImportResultDto, PairRuleDto, RosterEntryDto } from '@covalent/shared-types';
 import { DataSource, In } from 'typeorm';
+import { closeEmptyCatchups } from '../catchup/close-empty-catchups';
 import { ApiException } from '../common/api-error';
 import { readCsvTable, refuseIfProblems } from '../media/csv-table';
 import { UserEntity } from '../users/entities/user.entity';
@@ -72,8 +73,12 @@ export class RosterService {
 
   async remove(user: UserEntity, classId: string, entryId: string): Promise<void> {
     await this.classes.access(user, classId, 'own');
-    const { affected } = await this.db.getRepository(RosterEntryEntity).delete({ id: entryId, classId });
-    if (!affected) throw entryNotFound();
+    await this.db.transaction(async (m) => {
+      // Their catch-up cards go with them (ON DELETE CASCADE).
+      const { affected } = await m.getRepository(RosterEntryEntity).delete({ id: entryId, classId });
+      if (!affected) throw entryNotFound();
+      await closeEmptyCatchups(m, { classId });
+    });
   }
 
   /** Appends (or, with `replace`, swaps in) a roster from CSV; every row checked first, one transaction. */
@@ -89,7 +94,10 @@ export class RosterService {
         rowProblems.push({ field: 'file', message: `A class holds at most ${ROSTER_MAX} students; this would make ${existing.length + entries.length}.` });
       }
       refuseIfProblems([...problems, ...rowProblems]);
-      if (mode === 'replace') await repo.delete({ classId });
+      if (mode === 'replace') {
+        await repo.delete({ classId });
+        await closeEmptyCatchups(manager, { classId });
+      }
       await repo.insert(entries.map((e) => ({ ...e, classId })));
       return { targetId: classId, imported: entries.length };
     });

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { DeletePlayerDataResponse } from '@covalent/shared-types';
 import { DataSource, EntityManager } from 'typeorm';
 import { ClassesService } from '../classes/classes.service';
+import { closeEmptyCatchups } from '../catchup/close-empty-catchups';
 import { ApiException } from '../common/api-error';
 import { DELETED_NICKNAME, DELETED_NICKNAME_KEY_PREFIX } from '../debrief/player-data';
 import { SessionEntity } from '../sessions/entities/session.entity';
@@ -37,13 +38,7 @@ export class PlayerDataService {
                                  WHERE session_id = $1 AND id = ANY($2) AND roster_entry_id IS NOT NULL AND removed_at IS NULL)`,
       [sessionId, playerIds],
     );
-    // A catch-up left with no cards has nobody to serve: close it, so its code says so.
-    await m.query(
-      `UPDATE catchups c SET closed_at = now(), updated_at = now()
-        WHERE c.session_id = $1 AND c.closed_at IS NULL
-          AND NOT EXISTS (SELECT 1 FROM catchup_cards k WHERE k.catchup_id = c.id)`,
-      [sessionId],
-    );
+    await closeEmptyCatchups(m, { sessionId });
     const deleted: unknown[] = await m.query('DELETE FROM responses WHERE session_id = $1 AND player_id = ANY($2) RETURNING id', [sessionId, playerIds]);
     await m.query(
       `UPDATE session_players SET nickname = $3, nickname_key = $4 || id::text, roster_entry_id = NULL, table_group = NULL,
