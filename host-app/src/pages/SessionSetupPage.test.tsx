@@ -1,7 +1,7 @@
 import type { BankDto, ClassDto, ItemDto } from '@covalent/shared-types';
 import { screen, fireEvent, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { makeSessionDto } from '@/features/live/testing/liveFactories';
 import { setHostSocketFactory } from '@/realtime';
 import { FakeHostSocket } from '@/realtime/testing/FakeHostSocket';
@@ -88,6 +88,22 @@ describe('SessionSetupPage', () => {
     renderApp(routes.sessionNew.build({ classId: 'class-1' }));
     await screen.findByRole('option', { name: 'Chemistry 10 · period P3' });
     expect(screen.getByLabelText('Class')).toHaveValue('class-1');
+  });
+
+  it('sends what the form shows when a link names a class or bank the teacher cannot pick', async () => {
+    const fetchMock = stubSetup();
+    // An archived bank and a class not in the list (e.g. archived since the link was made).
+    renderApp(routes.sessionNew.build({ bankId: 'bank-old', classId: 'class-gone' }));
+    const user = userEvent.setup();
+    await screen.findByRole('option', { name: 'Chemistry 10 · period P3' });
+    await user.click(screen.getByRole('button', { name: 'Create session and open host screen' }));
+    expect(await screen.findByText('Choose a bank.')).toBeInTheDocument();
+    expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'POST')).toBe(false);
+
+    await user.selectOptions(screen.getByLabelText('Bank'), 'bank-1');
+    await user.click(screen.getByRole('button', { name: 'Create session and open host screen' }));
+    await vi.waitFor(() => expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'POST')).toBe(true));
+    expect(sentBody(fetchMock, 'POST', '/api/sessions')).toMatchObject({ bankId: 'bank-1', classId: null });
   });
 
   it('names each format in our words with a one-line description', async () => {

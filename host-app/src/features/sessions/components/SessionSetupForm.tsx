@@ -58,9 +58,17 @@ export function SessionSetupForm({ initialBankId = '', initialClassId = '', onCr
   const set = <K extends keyof SessionSetupValues>(key: K, value: SessionSetupValues[K]) =>
     setValues((v) => ({ ...v, [key]: value }));
 
+  // An id from the link that is not in the lists (a stale link, an archived class) shows as
+  // "Choose a bank" / "Ad-hoc group", so it is sent as what the teacher sees.
+  const shown = (list: { id: string }[] | undefined, chosen: string) => (list && !list.some((x) => x.id === chosen) ? '' : chosen);
+
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const built = buildCreateSessionRequest(values);
+    const built = buildCreateSessionRequest({
+      ...values,
+      bankId: shown(banks.data, values.bankId),
+      classId: shown(classes.data, values.classId),
+    });
     if (!built.ok) {
       setErrors(built.errors);
       return;
