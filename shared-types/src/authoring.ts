@@ -111,8 +111,10 @@ export interface ClassDto {
  * name when no period is set. Two periods of one course share a name, so the period tells them apart.
  */
 export function classLabel(cls: { name: string; period?: string | null }): string {
-  const period = cls.period?.trim();
-  return period ? `${cls.name} · period ${period}` : cls.name;
+  // Periods are free text: "3", "P3", "Period 3" all read "period 3"; "B-block" stays as it is.
+  const period = cls.period?.trim().replace(/^(period\s*|p(?=\d))/i, '');
+  if (!period) return cls.name;
+  return /^\d/.test(period) ? `${cls.name} · period ${period}` : `${cls.name} · ${period}`;
 }
 
 /** A student in a class. */

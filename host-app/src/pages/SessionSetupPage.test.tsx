@@ -45,7 +45,7 @@ describe('SessionSetupPage', () => {
     expect(screen.queryByRole('option', { name: /Old bank/ })).not.toBeInTheDocument();
     await user.selectOptions(bankSelect, 'bank-1');
     // Two sections of one course share a name, so the period is in the option.
-    expect(screen.getByRole('option', { name: 'Chemistry 10 · period P3' })).toBeInTheDocument();
+    expect(screen.getByRole('option', { name: 'Chemistry 10 · period 3' })).toBeInTheDocument();
     await user.selectOptions(screen.getByLabelText('Class'), 'class-1');
 
     await user.click(await screen.findByRole('checkbox', { name: 'Choose and order the items myself' }));
@@ -86,7 +86,7 @@ describe('SessionSetupPage', () => {
   it('comes with the class chosen when opened from a class page', async () => {
     stubSetup();
     renderApp(routes.sessionNew.build({ classId: 'class-1' }));
-    await screen.findByRole('option', { name: 'Chemistry 10 · period P3' });
+    await screen.findByRole('option', { name: 'Chemistry 10 · period 3' });
     expect(screen.getByLabelText('Class')).toHaveValue('class-1');
   });
 
@@ -95,7 +95,7 @@ describe('SessionSetupPage', () => {
     // An archived bank and a class not in the list (e.g. archived since the link was made).
     renderApp(routes.sessionNew.build({ bankId: 'bank-old', classId: 'class-gone' }));
     const user = userEvent.setup();
-    await screen.findByRole('option', { name: 'Chemistry 10 · period P3' });
+    await screen.findByRole('option', { name: 'Chemistry 10 · period 3' });
     await user.click(screen.getByRole('button', { name: 'Create session and open host screen' }));
     expect(await screen.findByText('Choose a bank.')).toBeInTheDocument();
     expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'POST')).toBe(false);
