@@ -1,7 +1,7 @@
 import { buildModel, evaluate, MIXER_WEIGHTS, resolveTeamCount, type MixerModel } from './mixer-model';
 import type { CostBreakdown, MixerBudget, MixerInput, MixerResult } from './mixer.types';
 import { createRng, shuffle, type Rng } from './rng';
-import { separateKeepApart } from './separate-keep-apart';
+import { placeWithFewestTogether, separateKeepApart } from './separate-keep-apart';
 
 /**
  * 300 players into 75 teams (balanced, the slowest mode): a restart converges in
@@ -42,13 +42,12 @@ export function formTeams(input: MixerInput): MixerResult {
   }
   let winner = best as { teams: number[][]; cost: CostBreakdown };
   if (winner.cost.keepApartViolations > 0) {
-    // Swaps can stall with a pair together when a separation exists (DESIGN.md §4: never then).
-    const separated = separateKeepApart(model, k, rng);
-    if (separated) {
-      const teams = improve(model, stateOf(separated, k, rng), budget.swapPasses);
-      const cost = evaluate(model, teams);
-      if (cost.total < winner.cost.total - EPS) winner = { teams, cost };
-    }
+    // Swaps can stall with a pair together when a separation exists (DESIGN.md §4: never then);
+    // when none exists, a greedy start that keeps as few pairs together as it can.
+    const start = separateKeepApart(model, k, rng) ?? placeWithFewestTogether(model, k, rng);
+    const teams = improve(model, stateOf(start, k, rng), budget.swapPasses);
+    const cost = evaluate(model, teams);
+    if (cost.total < winner.cost.total - EPS) winner = { teams, cost };
   }
   return { teams: toIds(model, winner.teams), cost: winner.cost, seed: input.seed };
 }

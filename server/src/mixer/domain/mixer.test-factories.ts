@@ -50,3 +50,29 @@ export const partitionKey = (teams: readonly (readonly string[])[]): string =>
     .join(' | ');
 
 export const sizesOf = (teams: readonly (readonly string[])[]): number[] => teams.map((t) => t.length);
+
+/**
+ * Exhaustive oracle: the fewest keep-apart pairs together over every assignment of n players
+ * to k teams with sizes within one (kⁿ assignments, so only for small n). Independent of the
+ * Mixer's search; 0 means a separation exists.
+ */
+export function fewestTogether(n: number, k: number, pairs: readonly [number, number][]): number {
+  const distinct = new Map<string, [number, number]>();
+  for (const [a, b] of pairs) if (a !== b) distinct.set(a < b ? `${a},${b}` : `${b},${a}`, [a, b]);
+  const teamOf = new Int32Array(n);
+  let best = Infinity;
+  for (let code = 0; code < k ** n; code++) {
+    let c = code;
+    const sizes = new Array<number>(k).fill(0);
+    for (let i = 0; i < n; i++) {
+      teamOf[i] = c % k;
+      c = Math.floor(c / k);
+      sizes[teamOf[i]]++;
+    }
+    if (Math.max(...sizes) - Math.min(...sizes) > 1) continue;
+    let together = 0;
+    for (const [a, b] of distinct.values()) if (teamOf[a] === teamOf[b]) together++;
+    if (together < best) best = together;
+  }
+  return best;
+}

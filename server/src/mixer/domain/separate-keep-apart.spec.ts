@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { buildModel } from './mixer-model';
-import { makeInput, makePlayers, playerId } from './mixer.test-factories';
+import { fewestTogether, makeInput, makePlayers, playerId } from './mixer.test-factories';
 import { createRng } from './rng';
-import { separateKeepApart } from './separate-keep-apart';
+import { placeWithFewestTogether, separateKeepApart } from './separate-keep-apart';
 
 /** Keep-apart pairs by player index, read back from the model's matrix. */
 const pairsOf = (n: number, apart: Uint8Array): [number, number][] => {
@@ -24,24 +24,6 @@ function isSeparation(n: number, k: number, pairs: [number, number][], teamOf: I
     sizes[teamOf[i]]++;
   }
   return Math.max(...sizes) - Math.min(...sizes) <= 1 && pairs.every(([a, b]) => teamOf[a] !== teamOf[b]);
-}
-
-/**
- * Exhaustive oracle: tries every assignment of n players to k labelled teams
- * (kⁿ of them, so only for small n), independent of the backtracking under test.
- */
-function someSeparationExists(n: number, k: number, pairs: [number, number][]): boolean {
-  const teamOf = new Int32Array(n);
-  const total = k ** n;
-  for (let code = 0; code < total; code++) {
-    let c = code;
-    for (let i = 0; i < n; i++) {
-      teamOf[i] = c % k;
-      c = Math.floor(c / k);
-    }
-    if (isSeparation(n, k, pairs, teamOf)) return true;
-  }
-  return false;
 }
 
 describe('separateKeepApart', () => {
@@ -99,12 +81,23 @@ describe('separateKeepApart', () => {
           const model = modelOf(n, rawPairs.map(([a, b]) => [a % n, b % n]));
           const pairs = pairsOf(n, model.apart);
           const teamOf = separateKeepApart(model, k, createRng(seed));
-          if (teamOf === null) expect(someSeparationExists(n, k, pairs)).toBe(false);
+          if (teamOf === null) expect(fewestTogether(n, k, pairs)).toBeGreaterThan(0);
           else expect(isSeparation(n, k, pairs, teamOf)).toBe(true);
         },
       ),
       { numRuns: 300 },
     );
+  });
+
+  it('without a separation, the greedy pass keeps sizes within one and puts one pair of k + 1 together', () => {
+    // Five students all to be kept apart, four teams: the pigeonhole principle forces one pair.
+    const pairs: [number, number][] = [];
+    for (let a = 0; a < 5; a++) for (let b = a + 1; b < 5; b++) pairs.push([a, b]);
+    const model = modelOf(14, pairs);
+    const teamOf = placeWithFewestTogether(model, 4, createRng('five'));
+    const sizes = [0, 1, 2, 3].map((t) => teamOf.filter((x) => x === t).length);
+    expect(Math.max(...sizes) - Math.min(...sizes)).toBeLessThanOrEqual(1);
+    expect(pairs.filter(([a, b]) => teamOf[a] === teamOf[b])).toHaveLength(1);
   });
 
   it('is deterministic for a seed and varies with it', () => {

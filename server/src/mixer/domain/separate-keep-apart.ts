@@ -32,15 +32,8 @@ export function separateKeepApart(
   rng: Rng,
   workBudget = KEEP_APART_WORK_BUDGET,
 ): Int32Array | null {
-  const { n, apart } = model;
-  const partners: number[][] = Array.from({ length: n }, () => []);
-  for (let a = 0; a < n; a++) {
-    for (let b = 0; b < n; b++) if (a !== b && apart[a * n + b]) partners[a].push(b);
-  }
-  // A seeded rank breaks ties, so different seeds find different separations.
-  const rank = new Int32Array(n);
-  shuffle(Array.from({ length: n }, (_, i) => i), rng).forEach((player, r) => (rank[player] = r));
-  const constrained = Array.from({ length: n }, (_, i) => i).filter((i) => partners[i].length > 0);
+  const { n } = model;
+  const { partners, rank, constrained } = keepApartGraph(model, rng);
 
   const base = Math.floor(n / k);
   const bigAllowed = n % k; // teams that may hold base + 1
@@ -121,8 +114,65 @@ export function separateKeepApart(
   };
 
   if (!search(0)) return null;
+  fillRest(teamOf, size, k, rng);
+  return teamOf;
+}
 
-  // The rest have no keep-apart partner: any free place will do.
+/**
+ * When no separation exists: one greedy pass in the same order (most teams ruled out
+ * first), each player going to the open team with the fewest of their keep-apart
+ * partners, so as few pairs as the pass can manage end up together (the swap search
+ * then lowers it further). Always gives teams whose sizes differ by at most one.
+ */
+export function placeWithFewestTogether(model: MixerModel, k: number, rng: Rng): Int32Array {
+  const { n } = model;
+  const { partners, rank, constrained } = keepApartGraph(model, rng);
+  const base = Math.floor(n / k);
+  const bigAllowed = n % k;
+  const teamOf = new Int32Array(n).fill(-1);
+  const size = new Int32Array(k);
+  let bigTeams = 0;
+  const fits = (t: number): boolean => size[t] < base || (size[t] === base && bigTeams < bigAllowed);
+  const together = new Int32Array(k);
+  const order = [...constrained].sort((a, b) => partners[b].length - partners[a].length || rank[a] - rank[b]);
+  for (const v of order) {
+    together.fill(0);
+    for (const p of partners[v]) if (teamOf[p] >= 0) together[teamOf[p]]++;
+    let pick = -1;
+    for (let t = 0; t < k; t++) {
+      if (!fits(t)) continue;
+      if (pick < 0 || together[t] < together[pick] || (together[t] === together[pick] && size[t] < size[pick])) pick = t;
+    }
+    teamOf[v] = pick;
+    if (size[pick] === base) bigTeams++;
+    size[pick]++;
+  }
+  fillRest(teamOf, size, k, rng);
+  return teamOf;
+}
+
+/** Each player's keep-apart partners, a seeded tie-breaking rank, and who has any partner. */
+function keepApartGraph(model: MixerModel, rng: Rng): { partners: number[][]; rank: Int32Array; constrained: number[] } {
+  const { n, apart } = model;
+  const partners: number[][] = Array.from({ length: n }, () => []);
+  for (let a = 0; a < n; a++) {
+    for (let b = 0; b < n; b++) if (a !== b && apart[a * n + b]) partners[a].push(b);
+  }
+  // A seeded rank breaks ties, so different seeds find different arrangements.
+  const rank = new Int32Array(n);
+  shuffle(Array.from({ length: n }, (_, i) => i), rng).forEach((player, r) => (rank[player] = r));
+  const constrained = Array.from({ length: n }, (_, i) => i).filter((i) => partners[i].length > 0);
+  return { partners, rank, constrained };
+}
+
+/** Players not yet placed (no keep-apart partner) take the free places, in shuffled order. */
+function fillRest(teamOf: Int32Array, size: Int32Array, k: number, rng: Rng): void {
+  const n = teamOf.length;
+  const base = Math.floor(n / k);
+  const bigAllowed = n % k;
+  let bigTeams = 0;
+  for (let t = 0; t < k; t++) if (size[t] > base) bigTeams++;
+  const fits = (t: number): boolean => size[t] < base || (size[t] === base && bigTeams < bigAllowed);
   const rest = shuffle(
     Array.from({ length: n }, (_, i) => i).filter((i) => teamOf[i] < 0),
     rng,
@@ -130,8 +180,9 @@ export function separateKeepApart(
   let t = 0;
   for (const v of rest) {
     while (!fits(t)) t = (t + 1) % k;
-    place(v, t);
+    teamOf[v] = t;
+    if (size[t] === base) bigTeams++;
+    size[t]++;
     t = (t + 1) % k;
   }
-  return teamOf;
 }
