@@ -360,7 +360,7 @@ test.describe('a live session, host screen and six phones', () => {
       }
       await host.getByRole('button', { name: 'Start' }).click();
 
-      /** Opens a round and finds each team's called member: the only phone with options. */
+      /** Opens a round and finds each team's called member: the only phone with the answer buttons. */
       async function openAndFindCalled(item: BankItem): Promise<Phone[]> {
         await host.getByRole('button', { name: 'Open round' }).click();
         await expectRoundOpen(phones, item);
@@ -369,7 +369,8 @@ test.describe('a live session, host screen and six phones', () => {
           const withOptions: Phone[] = [];
           for (const m of team.members) {
             const discuss = m.page.getByRole('status').filter({ hasText: 'Discuss with your team' });
-            const options = m.page.getByRole('list', { name: 'Options' });
+            // Exact: teammates see the options too, as a list "Options to talk over" with nothing to press.
+            const options = m.page.getByRole('list', { name: 'Options', exact: true });
             await expect(discuss.or(options)).toBeVisible();
             if (await options.isVisible()) withOptions.push(m);
           }

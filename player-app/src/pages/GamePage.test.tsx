@@ -111,7 +111,8 @@ describe(GamePage.name, () => {
     expect(screen.getByText('Discuss with your team — Ada answers this one.')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /On your face/ })).not.toBeInTheDocument();
     // The options are there to read while the team talks, with nothing to press.
-    const preview = screen.getByRole('list', { name: 'Options' });
+    const preview = screen.getByRole('list', { name: 'Options to talk over' });
+    expect(screen.queryByRole('list', { name: 'Options' })).not.toBeInTheDocument();
     expect(within(preview).getAllByRole('listitem').map((li) => li.textContent)).toContain('B. On your face');
     expect(within(preview).queryAllByRole('button')).toHaveLength(0);
 

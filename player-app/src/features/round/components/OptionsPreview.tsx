@@ -10,7 +10,8 @@ export interface OptionsPreviewProps {
  */
 export function OptionsPreview({ item }: OptionsPreviewProps) {
   if (item.type !== 'single' && item.type !== 'multi' && item.type !== 'order') return null;
-  const label = item.type === 'order' ? 'Steps to put in order' : 'Options';
+  // Named apart from the answer buttons' "Options" list: these are to read, not to press.
+  const label = item.type === 'order' ? 'Steps to talk over' : 'Options to talk over';
   return (
     <ul className="options options-preview" aria-label={label}>
       {item.options.map((option, index) => (
