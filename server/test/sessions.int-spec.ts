@@ -322,6 +322,20 @@ describe(`${LiveSessionsService.name} (integration: REST + sockets + PostgreSQL)
       expect(view.summary).toEqual({ answered: 1, correct: 1, points: 1000, itemCount: 1 });
       expect(view.ownStanding).toEqual({ rank: 1, points: 1000, teamCount: 1 });
     });
+    it('ended after one round of three, the phone counts one round played, not two missed', async () => {
+      const t = await newSession({ format: 'solo', teamCount: 1 }, [itemInputs.single(), itemInputs.single(), itemInputs.single()]);
+      const me = await joinAndConnect(t.session.joinCode, 'Ana');
+      const h = await host(t, t.session.id);
+      await command(h, { type: 'start' });
+      await command(h, { type: 'open_round' });
+      await emitAck(me.ts.socket, 'answer:submit', { clientMessageId: 'e1', roundIndex: 0, response: { type: 'single', optionId: t.items[0].key.correctOptionId } });
+      await waitFor(me.ts, 'round:closed');
+      await command(h, { type: 'reveal' });
+      expect(await command(h, { type: 'end' })).toMatchObject({ ok: true });
+      const ended = await emitAck(me.ts.socket, 'session:resync', {});
+      expect(ended.view).toMatchObject({ status: 'ended', summary: { answered: 1, correct: 1, points: 1000, itemCount: 1 } });
+    });
+
     it('places a late joiner on the smallest team; they play from the next round', async () => {
       const t = await newSession({ format: 'solo', teamCount: 2 }, [itemInputs.single(), itemInputs.truefalse()]);
       for (const name of ['Ana', 'Ben', 'Cai']) await joinAndConnect(t.session.joinCode, name);

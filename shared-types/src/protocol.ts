@@ -194,7 +194,7 @@ export interface PlayerSessionView {
   ownStanding: { rank: number; points: number; teamCount: number } | null;
   /** The class standings as the host chose to show them (empty when `none`). */
   standings: StandingRow[];
-  /** Your totals so far (for the end-of-session summary). */
+  /** Your totals so far (for the end-of-session summary); once ended, `itemCount` is the rounds played. */
   summary: { answered: number; correct: number; points: number; itemCount: number };
   serverNow: number;
 }

@@ -198,6 +198,20 @@ describe(GamePage.name, () => {
     expect(screen.getByText('Correct').nextSibling).toHaveTextContent('6');
   });
 
+  it('says the team’s points are "so far" after a round', async () => {
+    const own = { rank: 2, points: 1840, teamCount: 6 };
+    const { server } = await startGame(sessionView({ status: 'running', round: round() }));
+    server('round:revealed', reveal());
+    server('standings:update', { own, standings: [] });
+    expect(screen.getByText('1,840 points so far')).toBeInTheDocument();
+  });
+
+  it('says the team’s points are final on the end summary', async () => {
+    const own = { rank: 2, points: 1840, teamCount: 6 };
+    await startGame(sessionView({ status: 'ended', ownStanding: own, summary: { answered: 2, correct: 1, points: 1500, itemCount: 2 } }));
+    expect(screen.getByRole('region', { name: "Your team's standing" })).toHaveTextContent(/1,840 points$/);
+  });
+
   it('shows the reconnect banner while the socket is down', async () => {
     const { fake, server } = await startGame(sessionView({ status: 'running', round: round() }));
     const banner = screen.getByRole('status', { name: '' });

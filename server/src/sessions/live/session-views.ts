@@ -128,7 +128,9 @@ function playerSummary(s: LiveSession, playerId: string): PlayerSessionView['sum
     if (r.correct) correct++;
     points += r.points;
   }
-  return { answered, correct, points, itemCount: s.meta.items.length };
+  // Ended early, the rounds never played are not "missed": count the rounds the class played.
+  const itemCount = s.engine.status === 'ended' ? s.revealed.size : s.meta.items.length;
+  return { answered, correct, points, itemCount };
 }
 
 export function playerView(s: LiveSession, playerId: string, round: RoundState | null = s.engine.peekRound()): PlayerSessionView {

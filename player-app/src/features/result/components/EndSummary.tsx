@@ -29,7 +29,7 @@ export function EndSummary() {
           <dd>{formatPoints(summary.points)}</dd>
         </div>
       </dl>
-      {standing && <StandingCard standing={standing} teamName={teamName} />}
+      {standing && <StandingCard standing={standing} teamName={teamName} final />}
       <p className="field-hint">This was practice: it helps your teacher see what to go over again.</p>
       <button type="button" className="button-secondary" onClick={leaveSession}>
         Join another session
