@@ -17,8 +17,8 @@ export function HistorySummary({ history: h }: HistorySummaryProps) {
           <DataList.Value>
             <FigureText figure={h.meanPercent} format={formatPercentValue} />
             {h.meanPercent.value === null && (
-              <Text color="gray" size="2">
-                {' '}
+              // The value is a flex box, where a leading space collapses: a margin keeps them apart.
+              <Text color="gray" size="2" ml="1">
                 ({h.meanPercent.reason})
               </Text>
             )}
