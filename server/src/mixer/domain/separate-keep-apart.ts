@@ -35,17 +35,13 @@ export function separateKeepApart(
   const { n } = model;
   const { partners, rank, constrained } = keepApartGraph(model, rng);
 
-  const base = Math.floor(n / k);
-  const bigAllowed = n % k; // teams that may hold base + 1
+  const seats = new TeamSeats(n, k);
   // Every team has at least `base` members, so each player needs base − 1 teammates they may be with.
-  if (constrained.some((v) => n - 1 - partners[v].length < base - 1)) return null;
-  const teamOf = new Int32Array(n).fill(-1);
-  const size = new Int32Array(k);
-  let bigTeams = 0;
+  if (constrained.some((v) => n - 1 - partners[v].length < seats.base - 1)) return null;
+  const { teamOf } = seats;
   let usedTeams = 0;
   let work = 0;
 
-  const fits = (t: number): boolean => size[t] < base || (size[t] === base && bigTeams < bigAllowed);
   // Teams counted for the current player carry its stamp, so no set is built per call.
   const seenStamp = new Int32Array(k);
   let stamp = 0;
@@ -82,39 +78,28 @@ export function separateKeepApart(
     return pick;
   };
 
-  const place = (v: number, t: number): void => {
-    teamOf[v] = t;
-    if (size[t] === base) bigTeams++;
-    size[t]++;
-    if (t === usedTeams) usedTeams++;
-  };
-  const unplace = (v: number, t: number, wasUsed: number): void => {
-    teamOf[v] = -1;
-    size[t]--;
-    if (size[t] === base) bigTeams--;
-    usedTeams = wasUsed;
-  };
-
   const search = (placed: number): boolean => {
     if (placed === constrained.length) return true;
     if (work > workBudget) return false;
     const v = next();
     const limit = Math.min(usedTeams + 1, k);
     for (let t = 0; t < limit; t++) {
-      if (!fits(t)) continue;
+      if (!seats.fits(t)) continue;
       work += partners[v].length;
       if (partners[v].some((p) => teamOf[p] === t)) continue;
       const wasUsed = usedTeams;
-      place(v, t);
+      seats.seat(v, t);
+      if (t === usedTeams) usedTeams++;
       if (search(placed + 1)) return true;
-      unplace(v, t, wasUsed);
+      seats.unseat(v, t);
+      usedTeams = wasUsed;
       if (work > workBudget) return false;
     }
     return false;
   };
 
   if (!search(0)) return null;
-  fillRest(teamOf, size, k, rng);
+  seats.fillRest(rng);
   return teamOf;
 }
 
@@ -125,14 +110,9 @@ export function separateKeepApart(
  * then lowers it further). Always gives teams whose sizes differ by at most one.
  */
 export function placeWithFewestTogether(model: MixerModel, k: number, rng: Rng): Int32Array {
-  const { n } = model;
   const { partners, rank, constrained } = keepApartGraph(model, rng);
-  const base = Math.floor(n / k);
-  const bigAllowed = n % k;
-  const teamOf = new Int32Array(n).fill(-1);
-  const size = new Int32Array(k);
-  let bigTeams = 0;
-  const fits = (t: number): boolean => size[t] < base || (size[t] === base && bigTeams < bigAllowed);
+  const seats = new TeamSeats(model.n, k);
+  const { teamOf, size } = seats;
   const together = new Int32Array(k);
   const order = [...constrained].sort((a, b) => partners[b].length - partners[a].length || rank[a] - rank[b]);
   for (const v of order) {
@@ -140,14 +120,12 @@ export function placeWithFewestTogether(model: MixerModel, k: number, rng: Rng):
     for (const p of partners[v]) if (teamOf[p] >= 0) together[teamOf[p]]++;
     let pick = -1;
     for (let t = 0; t < k; t++) {
-      if (!fits(t)) continue;
+      if (!seats.fits(t)) continue;
       if (pick < 0 || together[t] < together[pick] || (together[t] === together[pick] && size[t] < size[pick])) pick = t;
     }
-    teamOf[v] = pick;
-    if (size[pick] === base) bigTeams++;
-    size[pick]++;
+    seats.seat(v, pick);
   }
-  fillRest(teamOf, size, k, rng);
+  seats.fillRest(rng);
   return teamOf;
 }
 
@@ -165,24 +143,51 @@ function keepApartGraph(model: MixerModel, rng: Rng): { partners: number[][]; ra
   return { partners, rank, constrained };
 }
 
-/** Players not yet placed (no keep-apart partner) take the free places, in shuffled order. */
-function fillRest(teamOf: Int32Array, size: Int32Array, k: number, rng: Rng): void {
-  const n = teamOf.length;
-  const base = Math.floor(n / k);
-  const bigAllowed = n % k;
-  let bigTeams = 0;
-  for (let t = 0; t < k; t++) if (size[t] > base) bigTeams++;
-  const fits = (t: number): boolean => size[t] < base || (size[t] === base && bigTeams < bigAllowed);
-  const rest = shuffle(
-    Array.from({ length: n }, (_, i) => i).filter((i) => teamOf[i] < 0),
-    rng,
-  );
-  let t = 0;
-  for (const v of rest) {
-    while (!fits(t)) t = (t + 1) % k;
-    teamOf[v] = t;
-    if (size[t] === base) bigTeams++;
-    size[t]++;
-    t = (t + 1) % k;
+/**
+ * Each player's team (−1 while unplaced) and the teams' sizes, under the sizes rule: every
+ * team holds ⌊n/k⌋, and n mod k of them one more.
+ */
+class TeamSeats {
+  readonly teamOf: Int32Array;
+  readonly size: Int32Array;
+  readonly base: number;
+  private readonly bigAllowed: number;
+  private bigTeams = 0;
+
+  constructor(n: number, private readonly k: number) {
+    this.teamOf = new Int32Array(n).fill(-1);
+    this.size = new Int32Array(k);
+    this.base = Math.floor(n / k);
+    this.bigAllowed = n % k;
+  }
+
+  fits(t: number): boolean {
+    return this.size[t] < this.base || (this.size[t] === this.base && this.bigTeams < this.bigAllowed);
+  }
+
+  seat(v: number, t: number): void {
+    this.teamOf[v] = t;
+    if (this.size[t] === this.base) this.bigTeams++;
+    this.size[t]++;
+  }
+
+  unseat(v: number, t: number): void {
+    this.teamOf[v] = -1;
+    this.size[t]--;
+    if (this.size[t] === this.base) this.bigTeams--;
+  }
+
+  /** Players not yet placed (no keep-apart partner) take the free places, in shuffled order. */
+  fillRest(rng: Rng): void {
+    const rest = shuffle(
+      Array.from({ length: this.teamOf.length }, (_, i) => i).filter((i) => this.teamOf[i] < 0),
+      rng,
+    );
+    let t = 0;
+    for (const v of rest) {
+      while (!this.fits(t)) t = (t + 1) % this.k;
+      this.seat(v, t);
+      t = (t + 1) % this.k;
+    }
   }
 }

@@ -1,6 +1,6 @@
 import { useEffect, useRef } from 'react';
 import type { CatchupAnswerResponse, CatchupItemView, ItemResponse } from '@covalent/shared-types';
-import { describeKey } from '@/features/result';
+import { RightAnswer } from '@/features/result';
 import { describeResponse } from '@/features/round';
 
 export interface CatchupFeedbackProps {
@@ -15,7 +15,6 @@ export interface CatchupFeedbackProps {
 /** Right or not in words, the right answer and the explanation, then on to the next item. */
 export function CatchupFeedback({ item, feedback, answered, last, onNext }: CatchupFeedbackProps) {
   const heading = useRef<HTMLHeadingElement>(null);
-  const keyLines = describeKey(item, feedback.key);
   const partly = !feedback.correct && feedback.credit > 0;
   const tone = feedback.correct ? 'right' : 'wrong';
 
@@ -32,20 +31,7 @@ export function CatchupFeedback({ item, feedback, answered, last, onNext }: Catc
         {feedback.correct ? 'Correct' : partly ? 'Partly correct' : 'Incorrect'}
       </h1>
       <p className="result-prompt">{item.prompt}</p>
-      <h2 className="result-subtitle">The right answer</h2>
-      {feedback.key.type === 'order' ? (
-        <ol className="result-key">
-          {keyLines.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ol>
-      ) : (
-        keyLines.map((line) => (
-          <p key={line} className="result-key">
-            {line}
-          </p>
-        ))
-      )}
+      <RightAnswer item={item} answerKey={feedback.key} />
       {answered && <p>Your answer: {describeResponse(item, answered)}</p>}
       {feedback.explanation && (
         <>

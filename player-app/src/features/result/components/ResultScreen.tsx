@@ -2,7 +2,8 @@ import { useEffect, useRef } from 'react';
 import type { PlayerReveal } from '@covalent/shared-types';
 import { describeResponse } from '@/features/round';
 import { useGameStore, type RoundView } from '@/stores/useGameStore';
-import { describeKey, formatPoints } from '../utils/describeKey';
+import { formatPoints } from '../utils/describeKey';
+import { RightAnswer } from './RightAnswer';
 import { StandingCard } from './StandingCard';
 
 export interface ResultScreenProps {
@@ -34,8 +35,6 @@ export function ResultScreen({ round, reveal }: ResultScreenProps) {
   const teamName = useGameStore((s) => s.team?.name ?? null);
   const heading = useRef<HTMLHeadingElement>(null);
   const verdict = verdictFor(reveal);
-  const keyLines = describeKey(round.item, reveal.key);
-  const ordered = reveal.key.type === 'order';
 
   useEffect(() => {
     heading.current?.focus();
@@ -54,20 +53,7 @@ export function ResultScreen({ round, reveal }: ResultScreenProps) {
       </h1>
       <p className="result-prompt">{round.item.prompt}</p>
 
-      <h2 className="result-subtitle">The right answer</h2>
-      {ordered ? (
-        <ol className="result-key">
-          {keyLines.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ol>
-      ) : (
-        keyLines.map((line) => (
-          <p key={line} className="result-key">
-            {line}
-          </p>
-        ))
-      )}
+      <RightAnswer item={round.item} answerKey={reveal.key} />
       {reveal.you?.response && (
         <p>Your answer: {describeResponse(round.item, reveal.you.response)}</p>
       )}
